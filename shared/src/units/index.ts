@@ -1,1 +1,10 @@
-export {};
+export { formatLength, type FormatLengthOptions } from './format-length.js';
+export { formatMass, type FormatMassOptions } from './format-mass.js';
+export { gramsToPounds } from './grams-to-pounds.js';
+export { inchesToMm } from './inches-to-mm.js';
+export { mmToInches } from './mm-to-inches.js';
+export { parseLength, type ParsedLength } from './parse-length.js';
+export { parseMass, type ParsedMass } from './parse-mass.js';
+export { poundsToGrams } from './pounds-to-grams.js';
+export { unitFactors } from './unit-factors.js';
+export { unitSystems, type UnitSystem } from './unit-system.js';

@@ -1,1 +1,3 @@
-export {};
+export * from './is-allowed.js';
+export * from './password-policy.js';
+export * from './roles.js';

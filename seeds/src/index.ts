@@ -1,0 +1,1 @@
+export * from './demo-league.js';

@@ -1,0 +1,10 @@
+import { Global, Module } from '@nestjs/common';
+
+import { APP_CONFIG, loadConfig } from './load-config.js';
+
+@Global()
+@Module({
+  providers: [{ provide: APP_CONFIG, useFactory: () => loadConfig() }],
+  exports: [APP_CONFIG],
+})
+export class ConfigModule {}

@@ -1,0 +1,4 @@
+import { AccountsAndLeague1764600000000 } from './1764600000000-accounts-and-league.js';
+
+/** Every migration in order; the only way the schema changes. */
+export const MIGRATIONS = [AccountsAndLeague1764600000000];

@@ -29,7 +29,10 @@ describe('parseTime', () => {
   });
 
   it('refuses 60 or more seconds after the minutes', () => {
-    expect(parseTime('1:60.00')).toEqual({ ok: false, message: '"1:60.00": seconds must be under 60 after the minutes' });
+    expect(parseTime('1:60.00')).toEqual({
+      ok: false,
+      message: '"1:60.00": seconds must be under 60 after the minutes',
+    });
   });
 
   it('refuses thousandths instead of rounding them', () => {

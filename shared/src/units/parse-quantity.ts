@@ -9,10 +9,13 @@ export interface QuantityGrammar {
   example: string;
 }
 
-// A decimal ("12", "12.5", ".5"), a fraction ("1/4") or a whole and a fraction ("12 1/2"),
+// A whole and a fraction ("12 1/2"), a fraction ("1/4") or a decimal ("12", "12.5", ".5"),
 // then an optional unit, with or without a space before it.
-const QUANTITY =
-  /^(?:(?<whole>\d+)\s+(?<mixedTop>\d+)\/(?<mixedBottom>\d+)|(?<top>\d+)\/(?<bottom>\d+)|(?<decimal>\d+(?:\.\d+)?|\.\d+))\s*(?<unit>[^\d\s./][^\d]*?)?$/u;
+const MIXED = String.raw`(?<whole>\d+)\s+(?<mixedTop>\d+)/(?<mixedBottom>\d+)`;
+const FRACTION = String.raw`(?<top>\d+)/(?<bottom>\d+)`;
+const DECIMAL = String.raw`(?<decimal>\d+(?:\.\d+)?|\.\d+)`;
+const UNIT = String.raw`(?<unit>[^\d\s./][^\d]*?)`;
+const QUANTITY = new RegExp(`^(?:${MIXED}|${FRACTION}|${DECIMAL})\\s*${UNIT}?$`, 'u');
 
 /** Parses "number unit" text (as found in CSV imports) into the stored SI unit. */
 export function parseQuantity(text: string, grammar: QuantityGrammar): ParsedQuantity {

@@ -13,9 +13,23 @@ describe('regularised incomplete gamma', () => {
     for (const x of [0.1, 1, 2.5, 10, 40]) expect(regularizedGammaQ(1, x)).toBeCloseTo(Math.exp(-x), 14);
   });
 
-  it('keeps P + Q = 1 on both sides of the series/fraction split', () => {
-    // Identity: P(a, x) + Q(a, x) = 1; x = 3 and 9 fall either side of a + 1 = 5 for a = 4.
-    for (const x of [3, 9]) expect(regularizedGammaP(4, x) + regularizedGammaQ(4, x)).toBeCloseTo(1, 14);
+  it('matches the Poisson sum for whole-number shapes on both sides of the series/fraction split', () => {
+    // Identity: Q(n, x) = e^(−x) Σ_{k<n} x^k/k!; for n = 4, x = 3 uses the series (x < a + 1) and x = 9
+    // the continued fraction. Hand-worked: Q(4, 3) = e^(−3)(1 + 3 + 4.5 + 4.5) = 13e^(−3) = 0.6472319.
+    const poisson = (n: number, x: number) => {
+      let term = 1;
+      let sum = 0;
+      for (let k = 0; k < n; k++) {
+        sum += term;
+        term *= x / (k + 1);
+      }
+      return Math.exp(-x) * sum;
+    };
+    expect(regularizedGammaQ(4, 3)).toBeCloseTo(13 * Math.exp(-3), 14);
+    for (const x of [0.5, 3, 9, 25]) {
+      expect(regularizedGammaQ(4, x)).toBeCloseTo(poisson(4, x), 13);
+      expect(regularizedGammaP(4, x)).toBeCloseTo(1 - poisson(4, x), 13);
+    }
   });
 });
 

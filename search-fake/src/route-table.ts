@@ -1,5 +1,5 @@
-import type { Action, ApiKey } from './api-keys.js';
 import { ApiError } from './api-error.js';
+import type { Action, ApiKey } from './api-keys.js';
 import type { Engine } from './engine.js';
 
 export interface RouteContext {

@@ -1,0 +1,50 @@
+import type { RouteObject } from 'react-router';
+import { paths } from '../config/paths.js';
+import { places } from '../config/places.js';
+import { RequireAuth } from '../features/auth/components/require-auth.js';
+import { lazyPage } from './lazy-page.js';
+import { RootLayout } from './routes/root-layout.js';
+import { RouteErrorPage } from './routes/route-error-page.js';
+
+const LandingPage = lazyPage(() => import('./routes/landing/landing-page.js'), 'LandingPage');
+const SignInPage = lazyPage(() => import('./routes/auth/sign-in-page.js'), 'SignInPage');
+const SignUpPage = lazyPage(() => import('./routes/auth/sign-up-page.js'), 'SignUpPage');
+const VerifyEmailPage = lazyPage(() => import('./routes/auth/verify-email-page.js'), 'VerifyEmailPage');
+const ForgotPasswordPage = lazyPage(() => import('./routes/auth/forgot-password-page.js'), 'ForgotPasswordPage');
+const ResetPasswordPage = lazyPage(() => import('./routes/auth/reset-password-page.js'), 'ResetPasswordPage');
+const AccountPage = lazyPage(() => import('./routes/account/account-page.js'), 'AccountPage');
+const SearchPage = lazyPage(() => import('./routes/search/search-page.js'), 'SearchPage');
+const ComingSoonPage = lazyPage(() => import('./routes/places/coming-soon-page.js'), 'ComingSoonPage');
+const NotFoundPage = lazyPage(() => import('./routes/not-found-page.js'), 'NotFoundPage');
+
+// Places still being built share one page; each later replaces its entry here.
+const placeRoutes: RouteObject[] = places.map((place) => {
+  const page = <ComingSoonPage placeKey={place.key} />;
+  return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
+});
+
+export const routeTree: RouteObject[] = [
+  {
+    element: <RootLayout />,
+    errorElement: <RouteErrorPage />,
+    children: [
+      { index: true, element: <LandingPage /> },
+      { path: paths.auth.signIn.path, element: <SignInPage /> },
+      { path: paths.auth.signUp.path, element: <SignUpPage /> },
+      { path: paths.auth.verifyEmail.path, element: <VerifyEmailPage /> },
+      { path: paths.auth.forgotPassword.path, element: <ForgotPasswordPage /> },
+      { path: paths.auth.resetPassword.path, element: <ResetPasswordPage /> },
+      {
+        path: paths.account.path,
+        element: (
+          <RequireAuth>
+            <AccountPage />
+          </RequireAuth>
+        ),
+      },
+      { path: paths.search.path, element: <SearchPage /> },
+      ...placeRoutes,
+      { path: '*', element: <NotFoundPage /> },
+    ],
+  },
+];

@@ -1,0 +1,4 @@
+import { createBrowserRouter } from 'react-router';
+import { routeTree } from './route-tree.js';
+
+export const router = createBrowserRouter(routeTree);

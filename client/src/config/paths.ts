@@ -1,0 +1,47 @@
+// Every route in one place: the router reads `path`, links call `href()`.
+
+/** Only same-site paths may be a return target, so a crafted link cannot send people elsewhere. */
+export function safeReturnPath(candidate: string | null | undefined): string | undefined {
+  if (!candidate || !candidate.startsWith('/') || candidate.startsWith('//') || candidate.includes('\\')) {
+    return undefined;
+  }
+  return candidate;
+}
+
+function withQuery(path: string, params: Record<string, string | undefined>): string {
+  const query = new URLSearchParams();
+  for (const [key, value] of Object.entries(params)) if (value) query.set(key, value);
+  const text = query.toString();
+  return text ? `${path}?${text}` : path;
+}
+
+function place(path: string) {
+  return { path, href: () => path };
+}
+
+export const paths = {
+  home: place('/'),
+  search: { path: '/search', href: (q?: string) => withQuery('/search', { q: q?.trim() }) },
+  auth: {
+    signIn: {
+      path: '/sign-in',
+      href: (returnTo?: string) => withQuery('/sign-in', { returnTo: safeReturnPath(returnTo) }),
+    },
+    signUp: {
+      path: '/sign-up',
+      href: (returnTo?: string) => withQuery('/sign-up', { returnTo: safeReturnPath(returnTo) }),
+    },
+    verifyEmail: { path: '/verify-email', href: (token?: string) => withQuery('/verify-email', { token }) },
+    forgotPassword: place('/forgot-password'),
+    resetPassword: { path: '/reset-password', href: (token?: string) => withQuery('/reset-password', { token }) },
+  },
+  account: place('/account'),
+  meets: place('/meets'),
+  results: place('/results'),
+  standings: place('/standings'),
+  rack: place('/rack'),
+  trials: place('/trials'),
+  grainMap: place('/grain-map'),
+  fieldNotes: place('/field-notes'),
+  firstCuts: place('/first-cuts'),
+} as const;

@@ -1,0 +1,2 @@
+// Stylesheets (fonts) mean nothing to jsdom.
+module.exports = {};

@@ -1,1 +1,2 @@
 export * from './demo-league.js';
+export * from './demo-meets.js';

@@ -12,7 +12,9 @@ import { APP_CONFIG } from './config/load-config.js';
 import type { AppConfig } from './config/env.schema.js';
 import { dataSourceOptions } from './database/data-source.js';
 import { HealthModule } from './health/health.module.js';
+import { LeagueModule } from './league/league.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { MeetsModule } from './meets/meets.module.js';
 import { SearchModule } from './search/search.module.js';
 import { UsersModule } from './users/users.module.js';
 
@@ -30,6 +32,8 @@ import { UsersModule } from './users/users.module.js';
     AuthModule,
     UsersModule,
     HealthModule,
+    LeagueModule,
+    MeetsModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: DomainErrorFilter }],
 })

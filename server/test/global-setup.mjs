@@ -11,5 +11,7 @@ export default async function globalSetup() {
   const db = createDataSource(loadConfig());
   await db.initialize();
   await db.runMigrations({ transaction: 'each' });
+  const { ensureEventCatalogue } = await import('../dist/meets/event-types.service.js');
+  await ensureEventCatalogue(db);
   await db.destroy();
 }

@@ -1,9 +1,30 @@
 import { EmailTokenEntity } from '../auth/entities/email-token.entity.js';
 import { AthleteEntity } from '../league/entities/athlete.entity.js';
+import { ClubInvitationEntity } from '../league/entities/club-invitation.entity.js';
 import { ClubEntity } from '../league/entities/club.entity.js';
 import { SeasonEntity } from '../league/entities/season.entity.js';
+import { EntryAthleteEntity } from '../meets/entities/entry-athlete.entity.js';
+import { EntryEntity } from '../meets/entities/entry.entity.js';
+import { EventTypeEntity } from '../meets/entities/event-type.entity.js';
+import { MeetChangeEntity } from '../meets/entities/meet-change.entity.js';
+import { MeetEventEntity } from '../meets/entities/meet-event.entity.js';
+import { MeetEntity } from '../meets/entities/meet.entity.js';
 import { ClubMembershipEntity } from '../users/entities/club-membership.entity.js';
 import { UserEntity } from '../users/entities/user.entity.js';
 
 /** Every entity, listed (ESM has no __dirname globbing). */
-export const ENTITIES = [UserEntity, ClubMembershipEntity, EmailTokenEntity, SeasonEntity, ClubEntity, AthleteEntity];
+export const ENTITIES = [
+  UserEntity,
+  ClubMembershipEntity,
+  EmailTokenEntity,
+  SeasonEntity,
+  ClubEntity,
+  AthleteEntity,
+  ClubInvitationEntity,
+  EventTypeEntity,
+  MeetEntity,
+  MeetEventEntity,
+  EntryEntity,
+  EntryAthleteEntity,
+  MeetChangeEntity,
+];

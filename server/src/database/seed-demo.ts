@@ -9,6 +9,7 @@ import { ClubEntity } from '../league/entities/club.entity.js';
 import { SeasonEntity } from '../league/entities/season.entity.js';
 import { ClubMembershipEntity } from '../users/entities/club-membership.entity.js';
 import { UserEntity } from '../users/entities/user.entity.js';
+import { seedMeets } from './seed-meets.js';
 
 /** Writes the invented demo league in one transaction. Returns false when data already exist. */
 export async function seedDemo(db: DataSource, demoPassword: string): Promise<boolean> {
@@ -53,6 +54,7 @@ export async function seedDemo(db: DataSource, demoPassword: string): Promise<bo
         await m.getRepository(AthleteEntity).update({ id: athleteIds.get(account.athleteKey)! }, { userId: id });
       }
     }
+    await seedMeets(m, clubIds);
   });
   return true;
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 
-import { canReachClub, isAllowed } from './is-allowed.js';
+import { canManageClub, canReachClub, isAllowed } from './is-allowed.js';
 
 describe('isAllowed', () => {
   it('refuses a signed-out visitor any role-guarded action', () => {
@@ -25,5 +25,17 @@ describe('canReachClub', () => {
     const coach = { role: 'COACH' as const, clubIds: ['club-a'] };
     expect(canReachClub(coach, 'club-a')).toBe(true);
     expect(canReachClub(coach, 'club-b')).toBe(false);
+  });
+});
+
+describe('canManageClub', () => {
+  it('lets a coach manage their own club but not another', () => {
+    const coach = { role: 'COACH' as const, clubIds: ['club-a'] };
+    expect(canManageClub(coach, 'club-a')).toBe(true);
+    expect(canManageClub(coach, 'club-b')).toBe(false);
+  });
+
+  it('does not let an athlete manage their own club', () => {
+    expect(canManageClub({ role: 'ATHLETE', clubIds: ['club-a'] }, 'club-a')).toBe(false);
   });
 });

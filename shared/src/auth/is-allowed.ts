@@ -22,3 +22,15 @@ export function canReachClub(actor: Actor | null | undefined, clubId: string): b
   if (actor.role === 'ADMIN') return true;
   return (actor.clubIds ?? []).includes(clubId);
 }
+
+/** Coaches manage their own club's roster, rack, trials and entries; admins every club's. */
+export function canManageClub(actor: Actor | null | undefined, clubId: string): boolean {
+  if (!actor) return false;
+  if (actor.role === 'ADMIN') return true;
+  return actor.role === 'COACH' && (actor.clubIds ?? []).includes(clubId);
+}
+
+/** Organisers and admins build and run meets. */
+export function canRunMeets(actor: Actor | null | undefined): boolean {
+  return isAllowed(actor, ['ORGANISER']);
+}

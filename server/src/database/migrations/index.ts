@@ -1,4 +1,5 @@
 import { AccountsAndLeague1764600000000 } from './1764600000000-accounts-and-league.js';
+import { MeetsAndEntries1764700000000 } from './1764700000000-meets-and-entries.js';
 
 /** Every migration in order; the only way the schema changes. */
-export const MIGRATIONS = [AccountsAndLeague1764600000000];
+export const MIGRATIONS = [AccountsAndLeague1764600000000, MeetsAndEntries1764700000000];

@@ -1,0 +1,16 @@
+import { Module } from '@nestjs/common';
+
+import { LeagueModule } from '../league/league.module.js';
+import { EntriesService } from './entries.service.js';
+import { EventTypesService } from './event-types.service.js';
+import { MeetEventsService } from './meet-events.service.js';
+import { MeetsRepository } from './meets.repository.js';
+import { MeetsResolver } from './meets.resolver.js';
+import { MeetsService } from './meets.service.js';
+
+@Module({
+  imports: [LeagueModule],
+  providers: [MeetsRepository, MeetsService, MeetEventsService, EntriesService, EventTypesService, MeetsResolver],
+  exports: [MeetsRepository, MeetsService],
+})
+export class MeetsModule {}

@@ -1,0 +1,44 @@
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+
+export const BASE_URL = process.env.PUBLIC_URL ?? 'http://127.0.0.1:3010';
+export const SHOT_DIR = process.env.E2E_SHOT_DIR ?? '/tmp/endgrain-e2e';
+
+const FLAGS = [
+  '--headless',
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+  '--no-first-run',
+];
+
+export const PHONE = { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true };
+export const DESKTOP = { viewport: { width: 1440, height: 900 }, isMobile: false, hasTouch: false };
+
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({ executablePath: '/usr/bin/chromium', args: FLAGS });
+}
+
+export interface Session {
+  context: BrowserContext;
+  page: Page;
+  /** Console errors and uncaught page errors seen so far. */
+  errors: string[];
+}
+
+/** A fresh browser profile (no stored token) at phone or desktop size. */
+export async function openSession(browser: Browser, device: typeof PHONE | typeof DESKTOP = DESKTOP): Promise<Session> {
+  const context = await browser.newContext({ ...device, baseURL: BASE_URL });
+  const page = await context.newPage();
+  const errors: string[] = [];
+  page.on('console', (m) => {
+    if (m.type() === 'error') errors.push(m.text());
+  });
+  page.on('pageerror', (e) => errors.push(e.message));
+  return { context, page, errors };
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  await page.screenshot({ path: `${SHOT_DIR}/${name}.png`, fullPage: true });
+}

@@ -2,6 +2,7 @@ export * from './auth/index.js';
 export * from './geometry/index.js';
 export * from './insights/index.js';
 export * from './league/index.js';
+export * from './results/index.js';
 export * from './scoring/index.js';
 export * from './species/index.js';
 export * from './stats/index.js';

@@ -1,4 +1,5 @@
 export * from './auth/index.js';
+export * from './field-notes/index.js';
 export * from './geometry/index.js';
 export * from './insights/index.js';
 export * from './league/index.js';

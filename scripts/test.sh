@@ -55,7 +55,7 @@ check typecheck npm run -s typecheck
 check graphql-schema-is-current bash scripts/check-schema.sh
 suite shared shared $JEST
 suite search-fake search-fake $JEST --runInBand
-suite server server $JEST --runInBand
+suite server server $JEST --runInBand --forceExit
 suite client client npx jest --config jest.config.cjs
 suite browser client npx jest --config e2e/jest.config.cjs --runInBand
 

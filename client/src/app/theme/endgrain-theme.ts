@@ -23,6 +23,8 @@ export const endgrainTheme = createTheme({
   },
   components: {
     MuiAppBar: { defaultProps: { elevation: 0, color: 'primary' } },
+    // Long e-mail addresses wrap instead of turning the message into a scroll box.
+    MuiAlert: { styleOverrides: { message: { overflow: 'visible', overflowWrap: 'anywhere', minWidth: 0 } } },
     MuiButton: { styleOverrides: { root: { minHeight: TOUCH_TARGET } } },
     MuiIconButton: { styleOverrides: { root: { minWidth: TOUCH_TARGET, minHeight: TOUCH_TARGET } } },
     MuiToggleButton: { styleOverrides: { root: { minHeight: TOUCH_TARGET, textTransform: 'none' } } },

@@ -19,7 +19,8 @@ for (const name of expected) {
 }
 for (const f of readdirSync(dir).filter((f) => f.endsWith('.check')).sort()) {
   const ok = readFileSync(join(dir, f), 'utf8').trim() === 'pass';
-  ok ? (passed += 1) : (failed += 1);
+  if (ok) passed += 1;
+  else failed += 1;
   lines.push(`${f.replace(/\.check$/, '')}: ${ok ? 'passed' : 'FAILED'}`);
 }
 console.log(`\n${lines.join('\n')}\n`);

@@ -5,8 +5,10 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
+
 import { Meilisearch } from 'meilisearch';
 import MiniSearch from 'minisearch';
+
 import { startSearchFake } from '../../search-fake/dist/server.js';
 
 const ARTICLE_COUNT = 10_000;

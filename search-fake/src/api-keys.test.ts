@@ -1,6 +1,8 @@
-import { describe, expect, it } from '@jest/globals';
 import { createHmac } from 'node:crypto';
-import { ApiError } from './api-error.js';
+
+import { describe, expect, it } from '@jest/globals';
+
+import { type ApiError } from './api-error.js';
 import { authorize, deriveApiKeys } from './api-keys.js';
 
 const CREATED = '2026-01-02T03:04:05.000Z';

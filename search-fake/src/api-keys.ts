@@ -1,4 +1,5 @@
 import { createHmac, timingSafeEqual } from 'node:crypto';
+
 import { ApiError } from './api-error.js';
 
 export interface ApiKey {

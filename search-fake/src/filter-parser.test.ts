@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { ApiError } from './api-error.js';
 import { parseFilter } from './filter-parser.js';
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { parseFilter } from './filter-parser.js';
 import { filterAttributes, filterPredicate } from './filter-predicate.js';
 

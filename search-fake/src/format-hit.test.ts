@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { formatHit, wordMatcher, type FormatOptions } from './format-hit.js';
 
 function options(overrides: Partial<FormatOptions>): FormatOptions {

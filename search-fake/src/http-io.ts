@@ -1,4 +1,5 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
+
 import { ApiError } from './api-error.js';
 
 // The hosted service's default payload limit.

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { readConfig } from './read-config.js';
 
 describe('readConfig', () => {

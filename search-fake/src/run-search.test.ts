@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from '@jest/globals';
 import { MeilisearchApiError, type Index } from 'meilisearch';
+
 import { rejection, useTestFake } from './testing/start-test-fake.js';
 
 // Invented field notes; numbers are made up for the checks below.

@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import { MeilisearchApiError } from 'meilisearch';
+
 import { rejection, startTestFake, useTestFake } from './testing/start-test-fake.js';
 
 // Every check here goes through the official SDK, as the server and client will.

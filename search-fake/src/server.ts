@@ -1,6 +1,7 @@
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { resolve } from 'node:path';
+
 import { ApiError } from './api-error.js';
 import { authorize, deriveApiKeys, type ApiKey } from './api-keys.js';
 import { Engine } from './engine.js';

@@ -1,7 +1,9 @@
-import { describe, expect, it } from '@jest/globals';
 import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+
+import { describe, expect, it } from '@jest/globals';
+
 import type { EngineSnapshot } from './engine.js';
 import { SnapshotStore } from './snapshot-store.js';
 

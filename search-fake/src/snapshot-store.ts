@@ -1,6 +1,7 @@
 import { mkdirSync, readFileSync, renameSync, writeFileSync } from 'node:fs';
 import { rename, writeFile } from 'node:fs/promises';
 import { join } from 'node:path';
+
 import type { EngineSnapshot } from './engine.js';
 
 const FILE_NAME = 'snapshot.json';

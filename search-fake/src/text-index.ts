@@ -1,4 +1,5 @@
 import MiniSearch from 'minisearch';
+
 import { valuesAt, type Doc } from './document-path.js';
 import type { TypoToleranceSettings } from './index-settings.js';
 import { normalizeTerm, queryTerms, tokenize } from './tokenize.js';

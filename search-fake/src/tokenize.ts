@@ -1,6 +1,7 @@
 // Letters and digits make words; everything else separates them.
 const WORD = /[\p{L}\p{N}]+/gu;
 const COMBINING_MARKS = /\p{M}+/gu;
+// eslint-disable-next-line no-control-regex -- the whole 7-bit range is meant
 const ASCII = /^[\x00-\x7f]*$/;
 
 export interface WordSpan {

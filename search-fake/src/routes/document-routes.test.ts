@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { rejection, useTestFake } from '../testing/start-test-fake.js';
 
 // Every check here goes through the official SDK, as the server and client will.

@@ -1,8 +1,10 @@
-import { afterAll, beforeAll } from '@jest/globals';
 import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+
+import { afterAll, beforeAll } from '@jest/globals';
 import { Meilisearch } from 'meilisearch';
+
 import { startSearchFake, type SearchFake, type SearchFakeOptions } from '../server.js';
 
 export const TEST_MASTER_KEY = 'test-master-key-for-contract-tests';

@@ -6,7 +6,7 @@ import { canManageClub } from '@endgrain/shared';
 import type { AuthUser } from '../common/auth/auth-user.js';
 import { DomainError } from '../common/errors/domain-error.js';
 import type { AthleteInput, ClubInput } from './dto/league.inputs.js';
-import { AthleteEntity } from './entities/athlete.entity.js';
+import { type AthleteEntity } from './entities/athlete.entity.js';
 import { LeagueRepository } from './league.repository.js';
 import { toAthleteModel, toClubModel } from './league.mappers.js';
 import { colour, divisions, email, experience, text } from './league.validation.js';

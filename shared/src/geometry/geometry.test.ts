@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { includedFromPerSide, perSideFromIncluded } from './bevel-angle.js';
 import { bevelBand } from './bevel-band.js';
 import { chiselBand } from './chisel-band.js';

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { describeSpecies } from './describe-species.js';
 import { grainMatrix } from './grain-matrix.js';
 import { EXAMPLE_SIMULATION as BASE, simulateRaceResults } from './simulate-race-results.js';

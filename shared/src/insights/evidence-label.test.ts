@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { evidenceLabel } from './evidence-label.js';
 
 describe('evidenceLabel', () => {

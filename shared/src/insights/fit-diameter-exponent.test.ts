@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { seededRandom } from '../stats/index.js';
 import { fitDiameterExponent, type DiameterRow } from './fit-diameter-exponent.js';
 

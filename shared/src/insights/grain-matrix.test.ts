@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { EVIDENCE_THRESHOLDS } from './evidence-label.js';
 import { grainMatrix } from './grain-matrix.js';
 import type { RaceResult } from './insight-types.js';

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { handicapMarks, type HandicapAthlete } from './handicap-marks.js';
 
 // Invented athletes; handicap block 300 mm, area scaling, newest 3 times count.

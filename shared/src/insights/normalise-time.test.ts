@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { normaliseTime } from './normalise-time.js';
 
 describe('normaliseTime', () => {

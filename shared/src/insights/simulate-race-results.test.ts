@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { simulateRaceResults } from './simulate-race-results.js';
 
 describe('simulateRaceResults', () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import type { TrialInput } from '../trials/index.js';
 import { trialEvidence } from './trial-evidence.js';
 

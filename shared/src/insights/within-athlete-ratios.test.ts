@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import type { RaceResult } from './insight-types.js';
 import { ratioEffect } from './ratio-effect.js';
 import { withinAthleteRatios } from './within-athlete-ratios.js';

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { percentOfBest } from './percent-of-best.js';
 
 // percentage scoring used by a northeastern spring meet: the winner earns 100; the formula is not

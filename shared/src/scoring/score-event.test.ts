@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { officialTime } from '../time/official-time.js';
 import { rankResults } from './rank-results.js';
 import type { ResultInput } from './result-types.js';

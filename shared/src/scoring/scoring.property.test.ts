@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { rankResults } from './rank-results.js';
 import type { ResultInput, ResultKind } from './result-types.js';
 import { scoreEvent } from './score-event.js';

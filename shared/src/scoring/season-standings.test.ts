@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { seasonStandings } from './season-standings.js';
 import type { ClubStanding, MeetTotals } from './standings-types.js';
 

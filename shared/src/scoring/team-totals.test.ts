@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { teamTotals, type DivisionEvent } from './team-totals.js';
 
 type Row = DivisionEvent['results'][number];

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { listSpecies } from './list-species.js';
 import { speciesById } from './species-by-id.js';
 import { speciesHardness } from './species-hardness.js';

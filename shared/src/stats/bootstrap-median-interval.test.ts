@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { bootstrapMedianInterval } from './bootstrap-median-interval.js';
 import { seededRandom } from './seeded-random.js';
 

@@ -1,4 +1,5 @@
 import { numericSort, quantileSorted } from 'simple-statistics';
+
 import { seededRandom } from './seeded-random.js';
 
 /** Endgrain's fixed defaults, stated so a published interval can be reproduced. */

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { leastSquaresSlope } from './least-squares-slope.js';
 
 describe('leastSquaresSlope', () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { mean } from './mean.js';
 import { sampleStdDev } from './sample-std-dev.js';
 

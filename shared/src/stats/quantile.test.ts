@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { median } from './median.js';
 import { quantile } from './quantile.js';
 import { quartiles } from './quartiles.js';

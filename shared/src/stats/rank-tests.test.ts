@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { kruskalWallis } from './kruskal-wallis.js';
 import { mannWhitney } from './mann-whitney.js';
 import { midRanks } from './mid-ranks.js';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { chiSquareSurvival } from './chi-square-survival.js';
 import { normalCdf } from './normal-cdf.js';
 import { regularizedBeta } from './regularized-beta.js';

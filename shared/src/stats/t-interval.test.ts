@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { tInterval } from './t-interval.js';
 
 // Student (1908) sleep data, paired differences (R datasets::sleep, group 2 − group 1).

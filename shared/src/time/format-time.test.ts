@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { formatTime } from './format-time.js';
 
 describe('formatTime', () => {

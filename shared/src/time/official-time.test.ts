@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { officialTime } from './official-time.js';
 
 describe('officialTime', () => {

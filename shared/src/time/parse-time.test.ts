@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { formatTime } from './format-time.js';
 import { parseTime } from './parse-time.js';
 

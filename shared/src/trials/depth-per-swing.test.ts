@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { depthPerSwing } from './depth-per-swing.js';
 
 describe('depthPerSwing', () => {

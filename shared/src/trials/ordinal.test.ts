@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { ordinal } from './ordinal.js';
 import { sharedPlaces } from './shared-places.js';
 

@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import type { TrialAxeRow } from './summarise-trial.js';
 import { RELEASE_SCALE, type ReleaseId } from './trial-types.js';
 import { trialVerdict } from './trial-verdict.js';

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { recommendationSentence } from './recommendation-sentence.js';
 import { summariseTrial } from './summarise-trial.js';
 import { testerEffect } from './tester-effect.js';

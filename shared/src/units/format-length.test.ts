@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { formatLength } from './format-length.js';
 
 describe('formatLength', () => {

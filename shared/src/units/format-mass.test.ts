@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { formatMass } from './format-mass.js';
 
 describe('formatMass', () => {

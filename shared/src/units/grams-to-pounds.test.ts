@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { gramsToPounds } from './grams-to-pounds.js';
 
 describe('gramsToPounds', () => {

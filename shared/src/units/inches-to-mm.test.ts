@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import fc from 'fast-check';
+
 import { inchesToMm } from './inches-to-mm.js';
 import { mmToInches } from './mm-to-inches.js';
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { mmToInches } from './mm-to-inches.js';
 
 describe('mmToInches', () => {

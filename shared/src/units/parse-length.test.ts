@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { parseLength } from './parse-length.js';
 
 describe('parseLength', () => {

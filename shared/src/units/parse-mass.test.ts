@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { parseMass } from './parse-mass.js';
 
 describe('parseMass', () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { poundsToGrams } from './pounds-to-grams.js';
 
 describe('poundsToGrams', () => {

@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { roundHalfUp } from './round-half-up.js';
 
 describe('roundHalfUp', () => {

@@ -28,6 +28,11 @@ export default tseslint.config(
     },
   },
   {
+    // Decorator metadata needs the value import of DTO classes: tell the rule about it.
+    files: ['server/**/*.ts'],
+    languageOptions: { parserOptions: { emitDecoratorMetadata: true, experimentalDecorators: true } },
+  },
+  {
     files: ['shared/src/**/*.ts'],
     rules: {
       'no-restricted-imports': ['error', {

@@ -9,8 +9,8 @@ import { SignedIn } from '../common/auth/roles.decorator.js';
 import { UserModel } from '../users/models/user.model.js';
 import { UsersService } from '../users/users.service.js';
 import { AuthService } from './auth.service.js';
-import { type SignInInput } from './dto/sign-in.input.js';
-import { type SignUpInput } from './dto/sign-up.input.js';
+import { SignInInput } from './dto/sign-in.input.js';
+import { SignUpInput } from './dto/sign-up.input.js';
 import { AuthPayloadModel } from './models/auth-payload.model.js';
 
 @Resolver()

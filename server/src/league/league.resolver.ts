@@ -6,7 +6,7 @@ import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { Public } from '../common/auth/public.decorator.js';
 import { Roles, SignedIn } from '../common/auth/roles.decorator.js';
 import { ClubsService } from './clubs.service.js';
-import { type AthleteInput, type ClubInput, type CreateSeasonInput, type InviteToClubInput } from './dto/league.inputs.js';
+import { AthleteInput, ClubInput, CreateSeasonInput, InviteToClubInput } from './dto/league.inputs.js';
 import { InvitationsService } from './invitations.service.js';
 import { AthleteModel } from './models/athlete.model.js';
 import { ClubDetailModel, ClubInvitationModel, ClubModel } from './models/club.model.js';

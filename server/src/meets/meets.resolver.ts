@@ -5,7 +5,7 @@ import type { AuthUser } from '../common/auth/auth-user.js';
 import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { Public } from '../common/auth/public.decorator.js';
 import { Roles } from '../common/auth/roles.decorator.js';
-import { type DrawOrderInput, type EnterMeetEventInput, type MeetEventInput, type MeetInput, MeetsFilter } from './dto/meet.inputs.js';
+import { DrawOrderInput, EnterMeetEventInput, MeetEventInput, MeetInput, MeetsFilter } from './dto/meet.inputs.js';
 import { EntriesService } from './entries.service.js';
 import { EventTypesService } from './event-types.service.js';
 import { MeetEventsService } from './meet-events.service.js';

@@ -8,7 +8,7 @@ import { formatGraphqlError } from './format-error.js';
 export function graphqlOptions(config: AppConfig): ApolloDriverConfig {
   const production = config.NODE_ENV === 'production';
   const armor = new ApolloArmor({
-    maxDepth: { n: 10 },
+    maxDepth: { n: 10, ignoreIntrospection: false, flattenFragments: true },
     maxAliases: { n: 15 },
     costLimit: { maxCost: 5000 },
     maxTokens: { n: 2000 },

@@ -44,4 +44,12 @@ export const paths = {
   grainMap: place('/grain-map'),
   fieldNotes: place('/field-notes'),
   firstCuts: place('/first-cuts'),
+  meet: { path: '/meets/:meetId', href: (meetId: string) => `/meets/${encodeURIComponent(meetId)}` },
+  newMeet: place('/meets/new'),
+  editMeet: { path: '/meets/:meetId/edit', href: (meetId: string) => `/meets/${encodeURIComponent(meetId)}/edit` },
+  clubs: place('/clubs'),
+  club: { path: '/clubs/:clubId', href: (clubId: string) => `/clubs/${encodeURIComponent(clubId)}` },
+  athlete: { path: '/athletes/:athleteId', href: (athleteId: string) => `/athletes/${encodeURIComponent(athleteId)}` },
+  /** The link in a club invitation e-mail (the server writes `/join-club?token=…`). */
+  joinClub: { path: '/join-club', href: (token?: string) => withQuery('/join-club', { token }) },
 } as const;

@@ -16,12 +16,26 @@ const AccountPage = lazyPage(() => import('./routes/account/account-page.js'), '
 const SearchPage = lazyPage(() => import('./routes/search/search-page.js'), 'SearchPage');
 const ComingSoonPage = lazyPage(() => import('./routes/places/coming-soon-page.js'), 'ComingSoonPage');
 const NotFoundPage = lazyPage(() => import('./routes/not-found-page.js'), 'NotFoundPage');
+const MeetsListPage = lazyPage(() => import('./routes/meets/meets-list-page.js'), 'MeetsListPage');
+const MeetPage = lazyPage(() => import('./routes/meets/meet-page.js'), 'MeetPage');
+const MeetBuilderPage = lazyPage(() => import('./routes/meets/meet-builder-page.js'), 'MeetBuilderPage');
+const ClubsListPage = lazyPage(() => import('./routes/clubs/clubs-list-page.js'), 'ClubsListPage');
+const ClubPage = lazyPage(() => import('./routes/clubs/club-page.js'), 'ClubPage');
+const AthletePage = lazyPage(() => import('./routes/clubs/athlete-page.js'), 'AthletePage');
+const JoinClubPage = lazyPage(() => import('./routes/clubs/join-club-page.js'), 'JoinClubPage');
 
-// Places still being built share one page; each later replaces its entry here.
-const placeRoutes: RouteObject[] = places.map((place) => {
+// Places still being built share one page; a built place joins this set and declares its own routes.
+const builtPlaces = new Set<string>(['meets']);
+const placeRoutes: RouteObject[] = places.filter((place) => !builtPlaces.has(place.key)).map((place) => {
   const page = <ComingSoonPage placeKey={place.key} />;
   return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
 });
+
+const meetBuilder = (
+  <RequireAuth roles={['ORGANISER']}>
+    <MeetBuilderPage />
+  </RequireAuth>
+);
 
 export const routeTree: RouteObject[] = [
   {
@@ -44,6 +58,14 @@ export const routeTree: RouteObject[] = [
       },
       { path: paths.search.path, element: <SearchPage /> },
       ...placeRoutes,
+      { path: paths.meets.path, element: <MeetsListPage /> },
+      { path: paths.meet.path, element: <MeetPage /> },
+      { path: paths.newMeet.path, element: meetBuilder },
+      { path: paths.editMeet.path, element: meetBuilder },
+      { path: paths.clubs.path, element: <ClubsListPage /> },
+      { path: paths.club.path, element: <ClubPage /> },
+      { path: paths.athlete.path, element: <AthletePage /> },
+      { path: paths.joinClub.path, element: <JoinClubPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

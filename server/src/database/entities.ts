@@ -9,6 +9,9 @@ import { EventTypeEntity } from '../meets/entities/event-type.entity.js';
 import { MeetChangeEntity } from '../meets/entities/meet-change.entity.js';
 import { MeetEventEntity } from '../meets/entities/meet-event.entity.js';
 import { MeetEntity } from '../meets/entities/meet.entity.js';
+import { MeetStandingEntity } from '../results/entities/meet-standing.entity.js';
+import { ResultAuditEntity } from '../results/entities/result-audit.entity.js';
+import { ResultEntity } from '../results/entities/result.entity.js';
 import { ClubMembershipEntity } from '../users/entities/club-membership.entity.js';
 import { UserEntity } from '../users/entities/user.entity.js';
 
@@ -27,4 +30,7 @@ export const ENTITIES = [
   EntryEntity,
   EntryAthleteEntity,
   MeetChangeEntity,
+  ResultEntity,
+  MeetStandingEntity,
+  ResultAuditEntity,
 ];

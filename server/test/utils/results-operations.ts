@@ -2,7 +2,7 @@ import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 
 import { gql } from './graphql.js';
-import { addAthlete, addMeetEvent, createMeet, enter, meetInput, setMeetStatus, type Ids } from './meet-operations.js';
+import { addAthlete, addMeetEvent, createMeet, demoToken, enter, meetInput, setMeetStatus, type Ids } from './meet-operations.js';
 
 export interface ResultShape {
   id: string;
@@ -107,4 +107,19 @@ export async function resultsMeet(app: INestApplication, ids: Ids, tokens: { org
   }
   await setMeetStatus(app, tokens.organiser, meetId, 'CLOSED');
   return { meetId, name: String(input['name']), chopId, athletes };
+}
+
+export interface ResultsActors {
+  organiser: string;
+  coach: string;
+  otherCoach: string;
+  athlete: string;
+}
+
+/** Tokens of the demo organiser, both demo coaches (Larchmere, Cedar Fork) and the demo athlete. */
+export async function resultsActors(app: INestApplication): Promise<ResultsActors> {
+  const [organiser, coach, otherCoach, athlete] = await Promise.all(
+    ['organiser@example.org', 'coach@example.org', 'coach.cedarfork@example.org', 'athlete@example.org'].map((email) => demoToken(app, email)),
+  );
+  return { organiser: organiser!, coach: coach!, otherCoach: otherCoach!, athlete: athlete! };
 }

@@ -26,3 +26,4 @@ export {
   type SchemeValue,
   type StoredResult,
 } from './score-meet-event.js';
+export { personalBests, type BestCandidate } from './personal-bests.js';

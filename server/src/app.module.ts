@@ -11,6 +11,7 @@ import { ConfigModule } from './config/config.module.js';
 import { APP_CONFIG } from './config/load-config.js';
 import type { AppConfig } from './config/env.schema.js';
 import { dataSourceOptions } from './database/data-source.js';
+import { FieldNotesModule } from './field-notes/field-notes.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LeagueModule } from './league/league.module.js';
 import { MailModule } from './mail/mail.module.js';
@@ -36,6 +37,7 @@ import { UsersModule } from './users/users.module.js';
     LeagueModule,
     MeetsModule,
     ResultsModule,
+    FieldNotesModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: DomainErrorFilter }],
 })

@@ -1,4 +1,10 @@
 import { EmailTokenEntity } from '../auth/entities/email-token.entity.js';
+import { ArticleImageEntity } from '../field-notes/entities/article-image.entity.js';
+import { ArticleReviewEntity } from '../field-notes/entities/article-review.entity.js';
+import { ArticleRevisionEntity } from '../field-notes/entities/article-revision.entity.js';
+import { ArticleEntity } from '../field-notes/entities/article.entity.js';
+import { FirstCutsStepEntity } from '../field-notes/entities/first-cuts-step.entity.js';
+import { ReadingProgressEntity } from '../field-notes/entities/reading-progress.entity.js';
 import { AthleteEntity } from '../league/entities/athlete.entity.js';
 import { ClubInvitationEntity } from '../league/entities/club-invitation.entity.js';
 import { ClubEntity } from '../league/entities/club.entity.js';
@@ -12,6 +18,7 @@ import { MeetEntity } from '../meets/entities/meet.entity.js';
 import { MeetStandingEntity } from '../results/entities/meet-standing.entity.js';
 import { ResultAuditEntity } from '../results/entities/result-audit.entity.js';
 import { ResultEntity } from '../results/entities/result.entity.js';
+import { SearchOutboxEntity } from '../search/entities/search-outbox.entity.js';
 import { ClubMembershipEntity } from '../users/entities/club-membership.entity.js';
 import { UserEntity } from '../users/entities/user.entity.js';
 
@@ -33,4 +40,11 @@ export const ENTITIES = [
   ResultEntity,
   MeetStandingEntity,
   ResultAuditEntity,
+  ArticleEntity,
+  ArticleRevisionEntity,
+  ArticleReviewEntity,
+  FirstCutsStepEntity,
+  ReadingProgressEntity,
+  ArticleImageEntity,
+  SearchOutboxEntity,
 ];

@@ -1,7 +1,16 @@
 import { Global, Module } from '@nestjs/common';
 
+import { SearchConfigController } from './search-config.controller.js';
+import { SearchIndexer } from './search-indexer.service.js';
+import { SearchKeyService } from './search-key.service.js';
+import { SearchOutboxRepository } from './search-outbox.repository.js';
+import { SearchRelayController } from './search-relay.controller.js';
 import { SearchService } from './search.service.js';
 
 @Global()
-@Module({ providers: [SearchService], exports: [SearchService] })
+@Module({
+  controllers: [SearchConfigController, SearchRelayController],
+  providers: [SearchService, SearchKeyService, SearchOutboxRepository, SearchIndexer],
+  exports: [SearchService, SearchOutboxRepository, SearchIndexer],
+})
 export class SearchModule {}

@@ -6,6 +6,7 @@ export * from './evidence-link.js';
 export * from './highlight-parts.js';
 export * from './render-markdown.js';
 export * from './safe-url.js';
+export * from './search-request.js';
 export * from './search-settings.js';
 export * from './search-words.js';
 export * from './slugify.js';

@@ -7,7 +7,7 @@ import type { PageInput, RecordsFilter, ResultsFilter, ResultsSort } from './dto
 import type { ResultAuditModel, ResultModel, ResultsPageModel } from './models/result.model.js';
 import type { AthleteResultsModel, ResultRecordModel } from './models/standings.model.js';
 import { ResultHydrator } from './result-hydrator.js';
-import { ResultsExplorerRepository, type ExplorerSort } from './results-explorer.repository.js';
+import { ResultsExplorerRepository, type ExplorerFilter, type ExplorerSort } from './results-explorer.repository.js';
 import { ResultsReadRepository } from './results-read.repository.js';
 
 export const MAX_PAGE_SIZE = 100;
@@ -32,7 +32,7 @@ export class ResultsBrowseService {
     return { total, page: index, pageSize, rows: await this.hydrator.models(rows) };
   }
 
-  async *exportRows(filter: ResultsFilter, sort: ResultsSort | null): AsyncGenerator<ResultModel[]> {
+  async *exportRows(filter: ExplorerFilter, sort: ExplorerSort | null): AsyncGenerator<ResultModel[]> {
     for await (const rows of this.explorer.each(filter, sort ?? DEFAULT_SORT)) yield this.hydrator.models(rows);
   }
 

@@ -2,6 +2,7 @@ import { Module } from '@nestjs/common';
 
 import { LeagueModule } from '../league/league.module.js';
 import { MeetsModule } from '../meets/meets.module.js';
+import { ResultsExportController } from './export/results-export.controller.js';
 import { ResultsImportController } from './import/results-import.controller.js';
 import { ResultsImportService } from './import/results-import.service.js';
 import { PublishService } from './publish.service.js';
@@ -22,6 +23,6 @@ import { StandingsService } from './standings.service.js';
     ResultsRepository, ResultsReadRepository, ResultsExplorerRepository, ResultsWriter, ResultHydrator,
     ResultsService, StandingsService, ResultsBrowseService, PublishService, ResultsImportService, ResultsResolver, StandingsResolver,
   ],
-  controllers: [ResultsImportController],
+  controllers: [ResultsImportController, ResultsExportController],
 })
 export class ResultsModule {}

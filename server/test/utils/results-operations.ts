@@ -65,6 +65,21 @@ export function seasonStandings(app: INestApplication, seasonId: string, divisio
     app, `query($s: ID!, $d: Division) { standings(seasonId: $s, division: $d) { tieBreak meets { id } divisions { ${STANDING} } } }`, { s: seasonId, d: division });
 }
 
+export function explore(app: INestApplication, filter: Record<string, unknown>, sort?: Record<string, unknown>, page?: Record<string, unknown>) {
+  return gql<{ results: { total: number; page: number; pageSize: number; rows: ResultShape[] } }>(
+    app, `query($f: ResultsFilter, $s: ResultsSort, $p: PageInput) { results(filter: $f, sort: $s, page: $p) { total page pageSize rows { ${RESULT} } } }`, { f: filter, s: sort, p: page });
+}
+
+export function records(app: INestApplication, filter: Record<string, unknown>) {
+  return gql<{ records: { eventName: string; speciesId: string | null; diameterMm: number | null; result: { label: string; totalHundredths: number; meetName: string; meetDate: string } }[] }>(
+    app, 'query($f: RecordsFilter) { records(filter: $f) { eventName speciesId diameterMm result { label totalHundredths meetName meetDate } } }', { f: filter });
+}
+
+export function athleteResults(app: INestApplication, athleteId: string) {
+  return gql<{ athleteResults: { name: string; personalBests: { eventName: string; diameterMm: number | null; result: { totalHundredths: number } }[]; results: { meetId: string; place: number }[] } }>(
+    app, 'query($a: ID!) { athleteResults(athleteId: $a) { name personalBests { eventName diameterMm result { totalHundredths } } results { meetId place } } }', { a: athleteId });
+}
+
 export function resultAudit(app: INestApplication, token: string | undefined, meetId: string) {
   return gql<{ resultAudit: { action: string; reason: string | null; byName: string | null; before: string | null; after: string }[] }>(
     app, 'query($m: ID!) { resultAudit(meetId: $m) { action reason byName before after } }', { m: meetId }, { token });
@@ -85,15 +100,17 @@ export interface ResultsMeet {
   name: string;
   chopId: string;
   /** Three Larchmere men and two Cedar Fork men, entered in the men's underhand chop. */
-  athletes: { name: string; clubId: string; entryId: string }[];
+  athletes: { id: string; name: string; clubId: string; entryId: string }[];
 }
 
 /** A meet with a men's underhand chop and five entries from two clubs, entries closed. */
-export async function resultsMeet(app: INestApplication, ids: Ids, tokens: { organiser: string; coach: string; otherCoach: string }, over: Record<string, unknown> = {}): Promise<ResultsMeet> {
+export async function resultsMeet(
+  app: INestApplication, ids: Ids, tokens: { organiser: string; coach: string; otherCoach: string }, over: Record<string, unknown> = {}, diameterMm = 304.8,
+): Promise<ResultsMeet> {
   const input = meetInput(ids, over);
   const created = await createMeet(app, tokens.organiser, input);
   const meetId = created.data!.createMeet.id;
-  const chop = await addMeetEvent(app, tokens.organiser, meetId, { eventTypeId: ids.eventTypes['underhand-chop'], division: 'MENS', speciesId: 'eastern-white-pine', diameterMm: 304.8 });
+  const chop = await addMeetEvent(app, tokens.organiser, meetId, { eventTypeId: ids.eventTypes['underhand-chop'], division: 'MENS', speciesId: 'eastern-white-pine', diameterMm });
   const chopId = chop.data!.addMeetEvent.id;
   await setMeetStatus(app, tokens.organiser, meetId, 'OPEN');
   const athletes: ResultsMeet['athletes'] = [];
@@ -102,7 +119,7 @@ export async function resultsMeet(app: INestApplication, ids: Ids, tokens: { org
       const added = await addAthlete(app, token, { clubId, firstName: 'Res', lastName: `T${unique()}`, divisions: ['MENS'], experience: 'EXPERIENCED' });
       const athlete = added.data!.addAthlete;
       const entry = await enter(app, token, chopId, clubId, [athlete.id]);
-      athletes.push({ name: athlete.name, clubId, entryId: entry.data!.enterMeetEvent.id });
+      athletes.push({ id: athlete.id, name: athlete.name, clubId, entryId: entry.data!.enterMeetEvent.id });
     }
   }
   await setMeetStatus(app, tokens.organiser, meetId, 'CLOSED');

@@ -23,9 +23,10 @@ const ClubsListPage = lazyPage(() => import('./routes/clubs/clubs-list-page.js')
 const ClubPage = lazyPage(() => import('./routes/clubs/club-page.js'), 'ClubPage');
 const AthletePage = lazyPage(() => import('./routes/clubs/athlete-page.js'), 'AthletePage');
 const JoinClubPage = lazyPage(() => import('./routes/clubs/join-club-page.js'), 'JoinClubPage');
+const GrainMapPage = lazyPage(() => import('./routes/grain-map/grain-map-page.js'), 'GrainMapPage');
 
 // Places still being built share one page; a built place joins this set and declares its own routes.
-const builtPlaces = new Set<string>(['meets']);
+const builtPlaces = new Set<string>(['meets', 'grainMap']);
 const placeRoutes: RouteObject[] = places.filter((place) => !builtPlaces.has(place.key)).map((place) => {
   const page = <ComingSoonPage placeKey={place.key} />;
   return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
@@ -66,6 +67,14 @@ export const routeTree: RouteObject[] = [
       { path: paths.club.path, element: <ClubPage /> },
       { path: paths.athlete.path, element: <AthletePage /> },
       { path: paths.joinClub.path, element: <JoinClubPage /> },
+      {
+        path: paths.grainMap.path,
+        element: (
+          <RequireAuth>
+            <GrainMapPage />
+          </RequireAuth>
+        ),
+      },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

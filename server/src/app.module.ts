@@ -16,6 +16,7 @@ import { HealthModule } from './health/health.module.js';
 import { LeagueModule } from './league/league.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MeetsModule } from './meets/meets.module.js';
+import { RackModule } from './rack/rack.module.js';
 import { ResultsModule } from './results/results.module.js';
 import { SearchModule } from './search/search.module.js';
 import { UsersModule } from './users/users.module.js';
@@ -36,6 +37,7 @@ import { UsersModule } from './users/users.module.js';
     HealthModule,
     LeagueModule,
     MeetsModule,
+    RackModule,
     ResultsModule,
     FieldNotesModule,
   ],

@@ -15,6 +15,11 @@ import { EventTypeEntity } from '../meets/entities/event-type.entity.js';
 import { MeetChangeEntity } from '../meets/entities/meet-change.entity.js';
 import { MeetEventEntity } from '../meets/entities/meet-event.entity.js';
 import { MeetEntity } from '../meets/entities/meet.entity.js';
+import { AxePhotoEntity } from '../rack/entities/axe-photo.entity.js';
+import { AxeServiceEntity } from '../rack/entities/axe-service.entity.js';
+import { AxeEntity } from '../rack/entities/axe.entity.js';
+import { LineupAssignmentEntity } from '../rack/entities/lineup-assignment.entity.js';
+import { LineupOverrideEntity } from '../rack/entities/lineup-override.entity.js';
 import { MeetStandingEntity } from '../results/entities/meet-standing.entity.js';
 import { ResultAuditEntity } from '../results/entities/result-audit.entity.js';
 import { ResultEntity } from '../results/entities/result.entity.js';
@@ -37,6 +42,11 @@ export const ENTITIES = [
   EntryEntity,
   EntryAthleteEntity,
   MeetChangeEntity,
+  AxeEntity,
+  AxeServiceEntity,
+  AxePhotoEntity,
+  LineupAssignmentEntity,
+  LineupOverrideEntity,
   ResultEntity,
   MeetStandingEntity,
   ResultAuditEntity,

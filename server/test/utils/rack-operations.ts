@@ -1,9 +1,41 @@
 import { crc32, deflateSync } from 'node:zlib';
 
+import { afterAll, beforeAll } from '@jest/globals';
 import type { INestApplication } from '@nestjs/common';
 import request from 'supertest';
 
 import { gql, type GqlResponse } from './graphql.js';
+import { demoToken, lookupIds, type Ids } from './meet-operations.js';
+import { createTestApp } from './test-app.js';
+
+export interface RackTestContext {
+  app: INestApplication;
+  ids: Ids;
+  organiser: string;
+  /** Larchmere's coach, Cedar Fork's coach and a Larchmere athlete (demo accounts). */
+  coach: string;
+  otherCoach: string;
+  athlete: string;
+}
+
+/** Starts the app once for a test file and signs in the demo people the rack tests need. */
+export function useRackApp(): RackTestContext {
+  const ctx = {} as RackTestContext;
+  beforeAll(async () => {
+    ctx.app = await createTestApp();
+    ctx.ids = await lookupIds(ctx.app);
+    [ctx.organiser, ctx.coach, ctx.otherCoach, ctx.athlete] = await Promise.all([
+      demoToken(ctx.app, 'organiser@example.org'),
+      demoToken(ctx.app, 'coach@example.org'),
+      demoToken(ctx.app, 'coach.cedarfork@example.org'),
+      demoToken(ctx.app, 'athlete@example.org'),
+    ]);
+  });
+  afterAll(async () => {
+    await ctx.app?.close();
+  });
+  return ctx;
+}
 
 // ---- Image builders: real PNGs (deflate + CRC), and JPEG/WebP files with a true structure ----
 

@@ -13,6 +13,7 @@ import type { AppConfig } from './config/env.schema.js';
 import { dataSourceOptions } from './database/data-source.js';
 import { FieldNotesModule } from './field-notes/field-notes.module.js';
 import { HealthModule } from './health/health.module.js';
+import { InsightsModule } from './insights/insights.module.js';
 import { LeagueModule } from './league/league.module.js';
 import { MailModule } from './mail/mail.module.js';
 import { MeetsModule } from './meets/meets.module.js';
@@ -40,6 +41,7 @@ import { UsersModule } from './users/users.module.js';
     RackModule,
     ResultsModule,
     FieldNotesModule,
+    InsightsModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: DomainErrorFilter }],
 })

@@ -5,6 +5,7 @@ import { ArticleRevisionEntity } from '../field-notes/entities/article-revision.
 import { ArticleEntity } from '../field-notes/entities/article.entity.js';
 import { FirstCutsStepEntity } from '../field-notes/entities/first-cuts-step.entity.js';
 import { ReadingProgressEntity } from '../field-notes/entities/reading-progress.entity.js';
+import { HandicapMarkEntity } from '../insights/entities/handicap-mark.entity.js';
 import { AthleteEntity } from '../league/entities/athlete.entity.js';
 import { ClubInvitationEntity } from '../league/entities/club-invitation.entity.js';
 import { ClubEntity } from '../league/entities/club.entity.js';
@@ -57,4 +58,5 @@ export const ENTITIES = [
   ReadingProgressEntity,
   ArticleImageEntity,
   SearchOutboxEntity,
+  HandicapMarkEntity,
 ];

@@ -9,10 +9,13 @@ import { FieldNotesRepository } from './field-notes.repository.js';
 import { FieldNotesResolver } from './field-notes.resolver.js';
 import { FirstCutsResolver } from './first-cuts.resolver.js';
 import { FirstCutsService } from './first-cuts.service.js';
+import { ArticleImagesController } from './images/article-images.controller.js';
+import { ArticleImagesService } from './images/article-images.service.js';
 
 /** Field Notes (findings, guides, safety notes), their review workflow, and the First Cuts series. */
 @Module({
-  providers: [FieldNotesRepository, FieldNoteViews, ArticlesService, ArticleWorkflowService, FirstCutsService, FieldNotesResolver, FirstCutsResolver],
+  controllers: [ArticleImagesController],
+  providers: [FieldNotesRepository, FieldNoteViews, ArticlesService, ArticleWorkflowService, FirstCutsService, ArticleImagesService, FieldNotesResolver, FirstCutsResolver],
 })
 export class FieldNotesModule implements OnModuleInit {
   constructor(

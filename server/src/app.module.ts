@@ -20,6 +20,7 @@ import { MeetsModule } from './meets/meets.module.js';
 import { RackModule } from './rack/rack.module.js';
 import { ResultsModule } from './results/results.module.js';
 import { SearchModule } from './search/search.module.js';
+import { TrialsModule } from './trials/trials.module.js';
 import { UsersModule } from './users/users.module.js';
 
 @Module({
@@ -42,6 +43,7 @@ import { UsersModule } from './users/users.module.js';
     ResultsModule,
     FieldNotesModule,
     InsightsModule,
+    TrialsModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: DomainErrorFilter }],
 })

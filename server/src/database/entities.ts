@@ -25,6 +25,10 @@ import { MeetStandingEntity } from '../results/entities/meet-standing.entity.js'
 import { ResultAuditEntity } from '../results/entities/result-audit.entity.js';
 import { ResultEntity } from '../results/entities/result.entity.js';
 import { SearchOutboxEntity } from '../search/entities/search-outbox.entity.js';
+import { TrialRunEntity } from '../trials/entities/trial-run.entity.js';
+import { TrialSummaryEntity } from '../trials/entities/trial-summary.entity.js';
+import { TrialTesterEntity } from '../trials/entities/trial-tester.entity.js';
+import { TrialEntity } from '../trials/entities/trial.entity.js';
 import { ClubMembershipEntity } from '../users/entities/club-membership.entity.js';
 import { UserEntity } from '../users/entities/user.entity.js';
 
@@ -59,4 +63,8 @@ export const ENTITIES = [
   ArticleImageEntity,
   SearchOutboxEntity,
   HandicapMarkEntity,
+  TrialEntity,
+  TrialTesterEntity,
+  TrialRunEntity,
+  TrialSummaryEntity,
 ];

@@ -45,7 +45,7 @@ export function ClubView({ clubId }: { clubId: string }) {
     return (
       <Alert severity={notFound ? 'info' : 'error'} role="alert">
         {notFound ? 'There is no such club. ' : graphQLErrorDetails(error)[0]?.message}{' '}
-        <RouterLink to={paths.clubs.href()}>See all clubs</RouterLink>
+        <Link component={RouterLink} to={paths.clubs.href()}>See all clubs</Link>
       </Alert>
     );
   }
@@ -95,7 +95,14 @@ export function ClubView({ clubId }: { clubId: string }) {
         </Section>
       )}
       {editing && <AthleteFormDialog clubId={club.id} athlete={editing.athlete} onClose={() => setEditing(null)} onDone={setNotice} />}
-      <Snackbar open={Boolean(notice)} autoHideDuration={6000} onClose={() => setNotice(undefined)} message={notice} />
+      <Snackbar
+        open={Boolean(notice)}
+        autoHideDuration={6000}
+        onClose={() => setNotice(undefined)}
+        message={notice}
+        // Above the phone's bottom bar, not over it.
+        sx={{ bottom: { xs: 'calc(80px + env(safe-area-inset-bottom))', sm: 24 } }}
+      />
     </Stack>
   );
 }

@@ -18,16 +18,18 @@ export interface AthleteChecklistProps {
   /** The rule the pick breaks, from the form or the server; read out as soon as it appears. */
   error: string | undefined;
   label: string;
+  /** Said when the list is empty. */
+  emptyText: string;
 }
 
 /**
  * One row per athlete, tall enough for a thumb. For a single event a new tick replaces the old one;
  * for pairs and teams the list stops taking ticks once it is full.
  */
-export function AthleteChecklist({ control, athletes, teamSize, alreadyIn, error, label }: AthleteChecklistProps) {
+export function AthleteChecklist({ control, athletes, teamSize, alreadyIn, error, label, emptyText }: AthleteChecklistProps) {
   const labelId = useId();
   if (athletes.length === 0) {
-    return <Typography>Nobody on this roster competes in this division yet. Add athletes on the club page first.</Typography>;
+    return <Typography>{emptyText}</Typography>;
   }
   return (
     <Controller

@@ -88,4 +88,19 @@ describe('EntryPickerDialog', () => {
     expect(await screen.findByRole('status')).toHaveTextContent('Entered: Rowan Tamarack.');
     expect(screen.getByRole('checkbox', { name: 'Rowan Tamarack' })).not.toBeChecked();
   });
+
+  it('offers a name filter when the division has more than twelve athletes', async () => {
+    const many = Array.from({ length: 13 }, (_, i) => ({ __typename: 'Athlete', id: `ath-${i}`, name: `Sawyer ${String.fromCharCode(65 + i)}lder`, divisions: ['MENS'] }));
+    const { user } = renderWithProviders({
+      element: <EntryPickerDialog event={testMeetEvent()} clubs={[testClubs[0]!]} onClose={() => undefined} />,
+      mocks: [{ ...rosterMock, result: { data: { club: { ...rosterMock.result.data.club, roster: many } } } }],
+    });
+    await user.type(await screen.findByRole('searchbox', { name: 'Find an athlete' }), 'cl');
+    const list = screen.getByRole('group', { name: 'Athletes of Hollow Pine Woodsmen' });
+    // hand-worked: only "Sawyer Clder" (i = 2, letter C) contains "cl"
+    expect(within(list).getAllByRole('checkbox').map((box) => box.closest('label')?.textContent)).toEqual(['Sawyer Clder']);
+    await user.clear(screen.getByRole('searchbox', { name: 'Find an athlete' }));
+    await user.type(screen.getByRole('searchbox', { name: 'Find an athlete' }), 'zz');
+    expect(screen.getByText('Nobody in this division has "zz" in their name.')).toBeInTheDocument();
+  });
 });

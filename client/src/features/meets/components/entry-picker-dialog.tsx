@@ -1,7 +1,6 @@
 import { useMutation, useQuery } from '@apollo/client/react';
 import { DIVISION_LABELS } from '@endgrain/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
-import Alert from '@mui/material/Alert';
 import MenuItem from '@mui/material/MenuItem';
 import TextField from '@mui/material/TextField';
 import Typography from '@mui/material/Typography';
@@ -40,6 +39,7 @@ export function EntryPickerDialog({ event, clubs, onClose }: EntryPickerDialogPr
   const [clubId, setClubId] = useState(clubs.length === 1 ? clubs[0]!.id : '');
   const [alert, setAlert] = useState<string>();
   const [entered, setEntered] = useState<string>();
+  const [find, setFind] = useState('');
   const roster = useQuery(meetsDocuments.clubRoster, { variables: { id: clubId }, skip: !clubId });
   const [enter] = useMutation(meetsDocuments.enterMeetEvent, {
     refetchQueries: [{ query: meetsDocuments.meet, variables: { id: event.meetId } }],
@@ -66,6 +66,10 @@ export function EntryPickerDialog({ event, clubs, onClose }: EntryPickerDialogPr
   const inDivision = athletes.filter((athlete) => athlete.divisions.includes(event.division));
   const alreadyIn = new Set(event.entries.flatMap((entry) => entry.athletes.map((athlete) => athlete.id)));
   const outside = athletes.length - inDivision.length;
+  // A long roster gets a name filter, so nobody scrolls a phone through thirty names.
+  const searchable = inDivision.length > 12;
+  const words = find.trim().toLowerCase();
+  const shown = searchable && words ? inDivision.filter((athlete) => athlete.name.toLowerCase().includes(words)) : inDivision;
 
   return (
     <FormDialog
@@ -77,13 +81,9 @@ export function EntryPickerDialog({ event, clubs, onClose }: EntryPickerDialogPr
       fullScreenOnPhone
       cancelLabel="Done"
       submitDisabled={!roster.data}
+      footerNote={entered && `${entered} Pick the next ${teamSize === 1 ? 'athlete' : 'entry'}, or choose Done.`}
     >
       <FormAlert message={alert} />
-      {entered && (
-        <Alert severity="success" role="status">
-          {entered} Pick the next {teamSize === 1 ? 'athlete' : 'entry'}, or choose Done.
-        </Alert>
-      )}
       {clubs.length > 1 && (
         <TextField select label="Club" value={clubId} onChange={(change) => { setClubId(change.target.value); reset({ athleteIds: [] }); }}>
           {clubs.map((club) => (
@@ -101,9 +101,23 @@ export function EntryPickerDialog({ event, clubs, onClose }: EntryPickerDialogPr
             {teamSize === 1 ? 'Pick one athlete' : `Pick ${teamSize} athletes`} from the {DIVISION_LABELS[event.division]} division
             {event.eventType.mixedPair ? ' (one woman and one man)' : ''}.
           </Typography>
+          {searchable && (
+            <TextField
+              label="Find an athlete"
+              type="search"
+              value={find}
+              onChange={(change) => setFind(change.target.value)}
+              slotProps={{ htmlInput: { autoComplete: 'off' } }}
+            />
+          )}
           <AthleteChecklist
             control={control}
-            athletes={inDivision}
+            athletes={shown}
+            emptyText={
+              words
+                ? `Nobody in this division has "${find.trim()}" in their name.`
+                : 'Nobody on this roster competes in this division yet. Add athletes on the club page first.'
+            }
             teamSize={teamSize}
             alreadyIn={alreadyIn}
             error={formState.errors.athleteIds?.message}

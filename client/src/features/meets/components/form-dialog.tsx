@@ -4,6 +4,7 @@ import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
 import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
 import { useTheme } from '@mui/material/styles';
 import useMediaQuery from '@mui/material/useMediaQuery';
 import { useId, type FormEventHandler, type ReactNode } from 'react';
@@ -18,12 +19,14 @@ export interface FormDialogProps {
   fullScreenOnPhone?: boolean;
   cancelLabel?: string;
   submitDisabled?: boolean;
+  /** A short confirmation in the footer, which stays in view however far the form is scrolled. */
+  footerNote?: ReactNode;
   children: ReactNode;
 }
 
 /** A dialog around one form, with Cancel and the form's submit button in its footer. */
 export function FormDialog(props: FormDialogProps) {
-  const { title, onClose, onSubmit, submitLabel, submitting, fullScreenOnPhone = false, cancelLabel = 'Cancel', submitDisabled = false, children } = props;
+  const { title, onClose, onSubmit, submitLabel, submitting, fullScreenOnPhone = false, cancelLabel = 'Cancel', submitDisabled = false, footerNote, children } = props;
   const theme = useTheme();
   const phone = useMediaQuery(theme.breakpoints.down('sm'), { noSsr: true });
   const titleId = useId();
@@ -35,7 +38,12 @@ export function FormDialog(props: FormDialogProps) {
           {children}
         </Stack>
       </DialogContent>
-      <DialogActions sx={{ px: 3, pb: 2, gap: 1 }}>
+      <DialogActions sx={{ px: 3, pb: 2, gap: 1, flexWrap: 'wrap' }}>
+        {footerNote && (
+          <Typography role="status" variant="body2" sx={{ flex: '1 1 100%', color: 'success.main', fontWeight: 700 }}>
+            {footerNote}
+          </Typography>
+        )}
         <Button onClick={onClose} disabled={submitting}>
           {cancelLabel}
         </Button>

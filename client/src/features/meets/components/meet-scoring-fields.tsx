@@ -6,7 +6,9 @@ import RadioGroup from '@mui/material/RadioGroup';
 import Stack from '@mui/material/Stack';
 import ToggleButton from '@mui/material/ToggleButton';
 import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
+import { useTheme } from '@mui/material/styles';
 import Typography from '@mui/material/Typography';
+import useMediaQuery from '@mui/material/useMediaQuery';
 import { useId } from 'react';
 import { Controller, useWatch, type Control, type FieldErrors, type UseFormRegister } from 'react-hook-form';
 
@@ -32,6 +34,9 @@ export interface MeetScoringFieldsProps {
 }
 
 export function MeetScoringFields({ control, register, errors }: MeetScoringFieldsProps) {
+  const theme = useTheme();
+  // Three long labels do not fit side by side on a phone: stack them full width there.
+  const phone = useMediaQuery(theme.breakpoints.down('sm'), { noSsr: true });
   const schemeId = useId();
   const tableId = useId();
   const scheme = useWatch({ control, name: 'scoringScheme' });
@@ -78,7 +83,8 @@ export function MeetScoringFields({ control, register, errors }: MeetScoringFiel
                 aria-labelledby={tableId}
                 value={field.value}
                 onChange={(_event, value: MeetFormValues['tablePreset'] | null) => value && field.onChange(value)}
-                sx={{ flexWrap: 'wrap' }}
+                orientation={phone ? 'vertical' : 'horizontal'}
+                fullWidth={phone}
               >
                 <ToggleButton value="7-6-5-4-3-2-1">7-6-5-4-3-2-1</ToggleButton>
                 <ToggleButton value="5-4-3-2-1-0">5-4-3-2-1-0</ToggleButton>

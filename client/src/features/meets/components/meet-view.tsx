@@ -3,6 +3,7 @@ import Add from '@mui/icons-material/Add';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
+import Link from '@mui/material/Link';
 import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
@@ -63,7 +64,7 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
     return (
       <Alert severity={notFound ? 'info' : 'error'} role="alert" action={!notFound && <Button onClick={() => void refetch()}>Try again</Button>}>
         {notFound ? 'This meet does not exist, or it is still being built and not public yet. ' : graphQLErrorDetails(error)[0]?.message}{' '}
-        {notFound && <RouterLink to={paths.meets.href()}>See all meets</RouterLink>}
+        {notFound && <Link component={RouterLink} to={paths.meets.href()}>See all meets</Link>}
       </Alert>
     );
   }
@@ -155,7 +156,14 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
           {dialog.entry.label} ({dialog.entry.clubName}) will no longer compete in {eventTitle(dialog.event)}.
         </ConfirmDialog>
       )}
-      <Snackbar open={Boolean(notice)} autoHideDuration={6000} onClose={() => setNotice(undefined)} message={notice} />
+      <Snackbar
+        open={Boolean(notice)}
+        autoHideDuration={6000}
+        onClose={() => setNotice(undefined)}
+        message={notice}
+        // Above the phone's bottom bar, not over it.
+        sx={{ bottom: { xs: 'calc(80px + env(safe-area-inset-bottom))', sm: 24 } }}
+      />
     </Stack>
   );
 }

@@ -50,7 +50,9 @@ export class TrialRecordingService {
       return;
     }
     if (existing.clubId !== clubId) throw DomainError.badInput('clubId', 'A trial stays with the club that recorded it.');
-    if (input.baseVersion !== existing.version) {
+    // The phone lost the answer to its last send, but that send did land: this edit follows it.
+    const landed = Boolean(input.unansweredToken) && existing.saveToken === input.unansweredToken;
+    if (!landed && input.baseVersion !== existing.version) {
       throw new DomainError(ErrorCode.Conflict, 'This trial was changed on another device since you opened it; reload it before saving again.');
     }
   }

@@ -88,6 +88,17 @@ describe('trials: recording, the verdict and publishing (real MariaDB)', () => {
     expect(errorCode(stale)).toBe('CONFLICT');
   });
 
+  it('builds on a send whose answer was lost, instead of calling the next edit a conflict', async () => {
+    const input = threeAxes();
+    // The first send lands, but the phone never hears back, so it still thinks it is unsaved.
+    await saveTrial(app, coach, input);
+    const next = await saveTrial(app, coach, { ...input, saveToken: randomUUID(), unansweredToken: input.saveToken, notes: 'edited offline' });
+    expect(next.errors).toBeUndefined();
+    expect(next.data!.saveTrial.version).toBe(2);
+    // Without the lost token the same edit would be refused.
+    expect(errorCode(await saveTrial(app, coach, { ...input, saveToken: randomUUID(), notes: 'no token' }))).toBe('CONFLICT');
+  });
+
   it('keeps the head a run was recorded with after the axe is reground', async () => {
     const input = threeAxes();
     await saveTrial(app, coach, input);

@@ -65,6 +65,12 @@ export class SaveTrialInput {
   @Field(() => String, { description: 'New for every local change; a resend with the same token is answered with the saved trial' })
   saveToken: string;
 
+  @Field(() => String, {
+    nullable: true,
+    description: 'The token of an earlier send whose answer never came back; if that send landed, this save builds on it',
+  })
+  unansweredToken?: string | null;
+
   @Field(() => String, { description: 'ISO date' })
   testedOn: string;
 

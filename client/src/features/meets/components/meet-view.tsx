@@ -51,7 +51,8 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
   useEffect(() => {
     if (carried) void navigate(location.pathname, { replace: true, state: null });
   }, [carried, navigate, location.pathname]);
-  const { data, error, loading, refetch } = useQuery(meetsDocuments.meet, { variables: { id: meetId } });
+  // Other clubs enter while this page is open elsewhere: show the cache, then refresh it.
+  const { data, error, loading, refetch } = useQuery(meetsDocuments.meet, { variables: { id: meetId }, fetchPolicy: 'cache-and-network' });
   const enterable = data?.meet.enterableClubIds ?? [];
   const options = useQuery(meetsDocuments.leagueOptions, { skip: enterable.length === 0 });
   const again = { refetchQueries: [{ query: meetsDocuments.meet, variables: { id: meetId } }], awaitRefetchQueries: true };

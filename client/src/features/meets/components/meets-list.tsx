@@ -29,7 +29,8 @@ export function MeetsList({ canRunMeets }: MeetsListProps) {
   const isNarrow = useMediaQuery(theme.breakpoints.down('md'), { noSsr: true });
   const { filter, setFilter, variables, narrowed } = useMeetsFilter();
   const options = useQuery(meetsDocuments.leagueOptions);
-  const meets = useQuery(meetsDocuments.meets, { variables: { filter: variables } });
+  // Shown from the cache at once, then refreshed: counts and new meets change from other screens.
+  const meets = useQuery(meetsDocuments.meets, { variables: { filter: variables }, fetchPolicy: 'cache-and-network' });
 
   return (
     <Stack spacing={3}>

@@ -4,6 +4,7 @@ import '@fontsource/nunito-sans/latin-700.css';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import { RouterProvider } from 'react-router/dom';
+
 import { AppProviders } from './app/app-providers.js';
 import { router } from './app/router.js';
 import { createApolloClient } from './lib/apollo.js';

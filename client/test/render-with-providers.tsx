@@ -4,6 +4,7 @@ import { render } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import type { ReactElement } from 'react';
 import { createMemoryRouter, RouterProvider, type RouteObject } from 'react-router';
+
 import { EndgrainThemeProvider } from '../src/app/theme/endgrain-theme-provider.js';
 import { AuthProvider } from '../src/features/auth/components/auth-provider.js';
 import { AUTH_TOKEN_KEY } from '../src/lib/auth-token.js';

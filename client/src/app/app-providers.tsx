@@ -2,6 +2,7 @@ import type { ApolloClient } from '@apollo/client';
 import { ApolloProvider } from '@apollo/client/react';
 import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
 import type { ReactNode } from 'react';
+
 import { AuthProvider } from '../features/auth/components/auth-provider.js';
 import { EndgrainThemeProvider } from './theme/endgrain-theme-provider.js';
 

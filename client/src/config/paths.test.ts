@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { paths, safeReturnPath } from './paths.js';
 
 describe('paths', () => {

@@ -1,6 +1,7 @@
 import { ApolloLink, gql } from '@apollo/client';
 import { describe, expect, it } from '@jest/globals';
 import { of } from 'rxjs';
+
 import { createApolloClient } from './apollo.js';
 import { AUTH_TOKEN_KEY } from './auth-token.js';
 

@@ -1,6 +1,7 @@
 import { CombinedGraphQLErrors } from '@apollo/client/errors';
 import { describe, expect, it, jest } from '@jest/globals';
 import type { UseFormSetError } from 'react-hook-form';
+
 import { applyServerErrors } from './apply-server-errors.js';
 
 type Form = { email: string; password: string };

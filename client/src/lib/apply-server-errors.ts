@@ -1,4 +1,5 @@
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
+
 import { graphQLErrorDetails } from './graphql-error-details.js';
 
 export interface ApplyServerErrorsOptions<T extends FieldValues> {

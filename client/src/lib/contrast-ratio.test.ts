@@ -1,4 +1,5 @@
 import { describe, expect, it } from '@jest/globals';
+
 import { contrastRatio } from './contrast-ratio.js';
 
 describe('contrastRatio', () => {

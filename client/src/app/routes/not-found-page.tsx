@@ -1,6 +1,7 @@
 import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import { Link as RouterLink } from 'react-router';
+
 import { PageHeading } from '../../components/ui/page-heading.js';
 import { paths } from '../../config/paths.js';
 

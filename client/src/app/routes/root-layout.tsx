@@ -1,5 +1,6 @@
 import { Suspense } from 'react';
 import { Outlet, ScrollRestoration } from 'react-router';
+
 import { AppShell } from '../../components/layouts/app-shell.js';
 import { PageLoading } from '../../components/ui/page-loading.js';
 import { AccountMenu } from '../../features/auth/components/account-menu.js';

@@ -3,6 +3,7 @@ import Button from '@mui/material/Button';
 import Container from '@mui/material/Container';
 import Stack from '@mui/material/Stack';
 import { isRouteErrorResponse, useRouteError } from 'react-router';
+
 import { PageHeading } from '../../components/ui/page-heading.js';
 
 /** Last resort when a page fails to load or draw, most often a stale copy after an update. */

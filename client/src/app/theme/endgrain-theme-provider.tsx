@@ -1,6 +1,7 @@
 import CssBaseline from '@mui/material/CssBaseline';
 import { ThemeProvider } from '@mui/material/styles';
 import type { ReactNode } from 'react';
+
 import { endgrainTheme } from './endgrain-theme.js';
 
 // Where the chosen theme (device, light, dark) is remembered between visits.

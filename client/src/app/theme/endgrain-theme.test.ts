@@ -1,5 +1,6 @@
 import type {} from '@mui/material/themeCssVarsAugmentation';
 import { describe, expect, it } from '@jest/globals';
+
 import { contrastRatio } from '../../lib/contrast-ratio.js';
 import { endgrainColors } from './endgrain-colors.js';
 import { endgrainTheme } from './endgrain-theme.js';

@@ -1,4 +1,5 @@
 import { createTheme } from '@mui/material/styles';
+
 import { endgrainColors } from './endgrain-colors.js';
 
 // WCAG 2.5.5 asks 44 × 44 CSS px for touch targets; gloved hands at a meet need no less.

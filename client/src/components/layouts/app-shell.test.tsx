@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import { screen, within } from '@testing-library/react';
+
 import { renderWithProviders } from '../../../test/render-with-providers.js';
 import { setViewport } from '../../../test/viewport.js';
 import { AppShell } from './app-shell.js';

@@ -4,6 +4,7 @@ import Link from '@mui/material/Link';
 import { useTheme } from '@mui/material/styles';
 import useMediaQuery from '@mui/material/useMediaQuery';
 import type { ReactNode } from 'react';
+
 import { BOTTOM_BAR_HEIGHT, BottomBar } from './bottom-bar.js';
 import { NAV_RAIL_WIDTH, NavRail } from './nav-rail.js';
 import { SiteHeader } from './site-header.js';

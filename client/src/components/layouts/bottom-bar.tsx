@@ -9,6 +9,7 @@ import ListItemText from '@mui/material/ListItemText';
 import Paper from '@mui/material/Paper';
 import { useState } from 'react';
 import { Link } from 'react-router';
+
 import { places } from '../../config/places.js';
 import { PlaceIcon } from './place-icon.js';
 import { useCurrentPlace } from './use-current-place.js';

@@ -2,6 +2,7 @@ import Box from '@mui/material/Box';
 import ButtonBase from '@mui/material/ButtonBase';
 import Typography from '@mui/material/Typography';
 import { NavLink } from 'react-router';
+
 import { places } from '../../config/places.js';
 import { PlaceIcon } from './place-icon.js';
 

@@ -7,6 +7,7 @@ import Leaderboard from '@mui/icons-material/Leaderboard';
 import MenuBook from '@mui/icons-material/MenuBook';
 import Science from '@mui/icons-material/Science';
 import type { SvgIconComponent } from '@mui/icons-material';
+
 import type { PlaceKey } from '../../config/places.js';
 
 const icons: Record<PlaceKey, SvgIconComponent> = {

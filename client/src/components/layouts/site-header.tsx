@@ -4,6 +4,7 @@ import Toolbar from '@mui/material/Toolbar';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
 import { Link } from 'react-router';
+
 import { paths } from '../../config/paths.js';
 import { SearchBox } from './search-box.js';
 

@@ -1,4 +1,5 @@
 import { useLocation } from 'react-router';
+
 import { places, type Place } from '../../config/places.js';
 
 /** The top-level place the current address sits under, if any. */

@@ -3,6 +3,7 @@ import VisibilityOff from '@mui/icons-material/VisibilityOff';
 import IconButton from '@mui/material/IconButton';
 import InputAdornment from '@mui/material/InputAdornment';
 import { useState } from 'react';
+
 import { FormTextField, type FormTextFieldProps } from './form-text-field.js';
 
 /** A password input with a show/hide switch: typing a long password on a phone keyboard is error-prone. */

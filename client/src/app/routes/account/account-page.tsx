@@ -2,6 +2,7 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
+
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { AccountSummary } from '../../../features/auth/components/account-summary.js';
 import { PreferencesForm } from '../../../features/auth/components/preferences-form.js';

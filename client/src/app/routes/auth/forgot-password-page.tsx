@@ -1,4 +1,5 @@
 import Typography from '@mui/material/Typography';
+
 import { NarrowPage } from '../../../components/layouts/narrow-page.js';
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { paths } from '../../../config/paths.js';

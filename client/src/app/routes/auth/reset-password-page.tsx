@@ -3,6 +3,7 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import { useState } from 'react';
 import { Link as RouterLink, useSearchParams } from 'react-router';
+
 import { NarrowPage } from '../../../components/layouts/narrow-page.js';
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { paths } from '../../../config/paths.js';

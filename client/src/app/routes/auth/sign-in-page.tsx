@@ -1,4 +1,5 @@
 import { Navigate, useNavigate } from 'react-router';
+
 import { NarrowPage } from '../../../components/layouts/narrow-page.js';
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { paths } from '../../../config/paths.js';

@@ -1,5 +1,6 @@
 import Typography from '@mui/material/Typography';
 import { Navigate, useNavigate } from 'react-router';
+
 import { NarrowPage } from '../../../components/layouts/narrow-page.js';
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { paths } from '../../../config/paths.js';

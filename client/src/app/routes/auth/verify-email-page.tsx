@@ -1,5 +1,6 @@
 import Alert from '@mui/material/Alert';
 import { useSearchParams } from 'react-router';
+
 import { NarrowPage } from '../../../components/layouts/narrow-page.js';
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { VerifyEmailStatus } from '../../../features/auth/components/verify-email-status.js';

@@ -5,6 +5,7 @@ import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import Box from '@mui/material/Box';
 import { Link as RouterLink } from 'react-router';
+
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { SafetyNote } from '../../../components/ui/safety-note.js';
 import { paths } from '../../../config/paths.js';

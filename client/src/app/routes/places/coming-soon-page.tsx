@@ -4,6 +4,7 @@ import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router';
+
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { paths } from '../../../config/paths.js';
 import { places, type PlaceKey } from '../../../config/places.js';

@@ -1,4 +1,5 @@
 import { gql, type TypedDocumentNode } from '@apollo/client';
+
 import type { AuthPayload, SignInInput, SignUpInput, UnitSystem, User } from './types.js';
 
 // Every operation asks for the same user fields, so one cached User serves the whole app.

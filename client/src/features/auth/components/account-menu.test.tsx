@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import { screen, waitFor } from '@testing-library/react';
+
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { testUser } from '../../../../test/fixtures.js';
 import { COLOR_MODE_STORAGE_KEY } from '../../../app/theme/endgrain-theme-provider.js';

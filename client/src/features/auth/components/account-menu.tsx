@@ -10,6 +10,7 @@ import MenuItem from '@mui/material/MenuItem';
 import { useColorScheme } from '@mui/material/styles';
 import { useId, useState, type ReactElement } from 'react';
 import { Link as RouterLink, useNavigate } from 'react-router';
+
 import { paths } from '../../../config/paths.js';
 import { useAuth } from '../hooks/use-auth.js';
 

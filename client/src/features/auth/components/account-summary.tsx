@@ -5,6 +5,7 @@ import ListItem from '@mui/material/ListItem';
 import ListItemText from '@mui/material/ListItemText';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
+
 import type { Role, User } from '../api/types.js';
 
 const roleNames: Record<Role, string> = {

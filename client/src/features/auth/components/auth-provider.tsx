@@ -1,5 +1,6 @@
 import { useApolloClient, useMutation, useQuery, skipToken } from '@apollo/client/react';
 import { useCallback, useEffect, useMemo, useRef, useSyncExternalStore, type ReactNode } from 'react';
+
 import { authToken } from '../../../lib/auth-token.js';
 import { authDocuments } from '../api/auth-documents.js';
 import type { AuthPayload, SignInInput, SignUpInput } from '../api/types.js';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import { screen } from '@testing-library/react';
+
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { testUser } from '../../../../test/fixtures.js';
 import { authDocuments } from '../api/auth-documents.js';

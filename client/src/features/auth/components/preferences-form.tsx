@@ -8,6 +8,7 @@ import ToggleButtonGroup from '@mui/material/ToggleButtonGroup';
 import { useId, useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { z } from 'zod';
+
 import { FormAlert } from '../../../components/ui/form-alert.js';
 import { FormTextField } from '../../../components/ui/form-text-field.js';
 import { SubmitButton } from '../../../components/ui/submit-button.js';

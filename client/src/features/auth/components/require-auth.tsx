@@ -2,6 +2,7 @@ import { isAllowed } from '@endgrain/shared';
 import Alert from '@mui/material/Alert';
 import type { ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router';
+
 import { PageLoading } from '../../../components/ui/page-loading.js';
 import { paths } from '../../../config/paths.js';
 import type { Role } from '../api/types.js';

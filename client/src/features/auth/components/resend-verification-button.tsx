@@ -2,6 +2,7 @@ import { useMutation } from '@apollo/client/react';
 import Button from '@mui/material/Button';
 import Typography from '@mui/material/Typography';
 import Box from '@mui/material/Box';
+
 import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
 import { authDocuments } from '../api/auth-documents.js';
 

@@ -1,5 +1,6 @@
 import { describe, expect, it, jest } from '@jest/globals';
 import { screen, waitFor } from '@testing-library/react';
+
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { authDocuments } from '../api/auth-documents.js';
 import { ResetPasswordForm } from './reset-password-form.js';

@@ -6,6 +6,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link as RouterLink } from 'react-router';
 import { z } from 'zod';
+
 import { FormAlert } from '../../../components/ui/form-alert.js';
 import { PasswordField } from '../../../components/ui/password-field.js';
 import { SubmitButton } from '../../../components/ui/submit-button.js';

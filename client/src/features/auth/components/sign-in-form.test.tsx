@@ -1,5 +1,6 @@
 import { describe, expect, it, jest } from '@jest/globals';
 import { screen, waitFor } from '@testing-library/react';
+
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { testUser } from '../../../../test/fixtures.js';
 import { AUTH_TOKEN_KEY } from '../../../lib/auth-token.js';

@@ -3,6 +3,7 @@ import Stack from '@mui/material/Stack';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
+
 import { EmailField } from '../../../components/ui/email-field.js';
 import { FormAlert } from '../../../components/ui/form-alert.js';
 import { PasswordField } from '../../../components/ui/password-field.js';

@@ -1,5 +1,6 @@
 import { describe, expect, it, jest } from '@jest/globals';
 import { screen } from '@testing-library/react';
+
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { authDocuments } from '../api/auth-documents.js';
 import { SignUpForm } from './sign-up-form.js';

@@ -1,5 +1,6 @@
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
+
 import { useAuth } from '../hooks/use-auth.js';
 import { ResendVerificationButton } from './resend-verification-button.js';
 

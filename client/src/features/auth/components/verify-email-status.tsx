@@ -4,6 +4,7 @@ import Button from '@mui/material/Button';
 import Stack from '@mui/material/Stack';
 import { useEffect, useRef } from 'react';
 import { Link as RouterLink } from 'react-router';
+
 import { PageLoading } from '../../../components/ui/page-loading.js';
 import { paths } from '../../../config/paths.js';
 import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';

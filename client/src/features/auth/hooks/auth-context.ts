@@ -1,4 +1,5 @@
 import { createContext } from 'react';
+
 import type { SignInInput, SignUpInput, User } from '../api/types.js';
 
 export type AuthStatus = 'loading' | 'signedIn' | 'signedOut';

@@ -1,4 +1,5 @@
 import { useContext } from 'react';
+
 import { AuthContext, type AuthContextValue } from './auth-context.js';
 
 export function useAuth(): AuthContextValue {

@@ -24,9 +24,13 @@ const ClubPage = lazyPage(() => import('./routes/clubs/club-page.js'), 'ClubPage
 const AthletePage = lazyPage(() => import('./routes/clubs/athlete-page.js'), 'AthletePage');
 const JoinClubPage = lazyPage(() => import('./routes/clubs/join-club-page.js'), 'JoinClubPage');
 const GrainMapPage = lazyPage(() => import('./routes/grain-map/grain-map-page.js'), 'GrainMapPage');
+const RackPage = lazyPage(() => import('./routes/rack/rack-page.js'), 'RackPage');
+const AxePage = lazyPage(() => import('./routes/rack/axe-page.js'), 'AxePage');
+const GeometryPage = lazyPage(() => import('./routes/rack/geometry-page.js'), 'GeometryPage');
+const LineupPage = lazyPage(() => import('./routes/rack/lineup-page.js'), 'LineupPage');
 
 // Places still being built share one page; a built place joins this set and declares its own routes.
-const builtPlaces = new Set<string>(['meets', 'grainMap']);
+const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack']);
 const placeRoutes: RouteObject[] = places.filter((place) => !builtPlaces.has(place.key)).map((place) => {
   const page = <ComingSoonPage placeKey={place.key} />;
   return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
@@ -75,6 +79,10 @@ export const routeTree: RouteObject[] = [
           </RequireAuth>
         ),
       },
+      { path: paths.rack.path, element: <RequireAuth><RackPage /></RequireAuth> },
+      { path: paths.rackAxe.path, element: <AxePage /> },
+      { path: paths.rackGeometry.path, element: <GeometryPage /> },
+      { path: paths.rackLineup.path, element: <RequireAuth><LineupPage /></RequireAuth> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -1,0 +1,96 @@
+import { useQuery } from '@apollo/client/react';
+import Build from '@mui/icons-material/Build';
+import Edit from '@mui/icons-material/Edit';
+import Alert from '@mui/material/Alert';
+import Button from '@mui/material/Button';
+import Link from '@mui/material/Link';
+import Snackbar from '@mui/material/Snackbar';
+import Stack from '@mui/material/Stack';
+import Typography from '@mui/material/Typography';
+import { useState } from 'react';
+import { Link as RouterLink } from 'react-router';
+
+import { PageHeading } from '../../../components/ui/page-heading.js';
+import { PageLoading } from '../../../components/ui/page-loading.js';
+import { paths } from '../../../config/paths.js';
+import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
+import { rackDocuments } from '../api/rack-documents.js';
+import type { UnitPreference } from '../api/types.js';
+import { AxeFormDialog } from './axe-form-dialog.js';
+import { AxePhotos } from './axe-photos.js';
+import { AxeSetup } from './axe-setup.js';
+import { AxeStatusChip } from './axe-status-chip.js';
+import { RackCautions } from './rack-cautions.js';
+import { RackSection } from './rack-section.js';
+import { ServiceFormDialog } from './service-form-dialog.js';
+import { ServiceHistory } from './service-history.js';
+
+export interface AxeViewProps {
+  axeId: string;
+  units: UnitPreference;
+  /** Today's date (YYYY-MM-DD) for a new service entry; passed in so tests can pin it. */
+  today: string;
+}
+
+export function AxeView({ axeId, units, today }: AxeViewProps) {
+  const { data, loading, error } = useQuery(rackDocuments.axe, { variables: { id: axeId } });
+  const [dialog, setDialog] = useState<'edit' | 'service' | null>(null);
+  const [notice, setNotice] = useState<string>();
+
+  if (loading && !data) return <PageLoading label="Loading the axe" />;
+  if (error || !data) {
+    const notFound = graphQLErrorDetails(error).some((detail) => detail.code === 'NOT_FOUND');
+    return (
+      <Alert severity={notFound ? 'info' : 'error'} role="alert">
+        {notFound ? "There is no such axe, or it belongs to another club's private rack. " : graphQLErrorDetails(error)[0]?.message}{' '}
+        <Link component={RouterLink} to={paths.rack.href()}>Back to the rack</Link>
+      </Alert>
+    );
+  }
+  const axe = data.axe;
+  return (
+    <Stack spacing={3}>
+      <div>
+        <Link component={RouterLink} to={paths.rack.href(axe.clubId)}>
+          {axe.clubName} rack
+        </Link>
+        <Stack direction="row" spacing={2} sx={{ alignItems: 'center', flexWrap: 'wrap' }}>
+          <PageHeading lead={axe.maker || undefined}>{axe.label}</PageHeading>
+          <AxeStatusChip status={axe.status} />
+        </Stack>
+      </div>
+      {axe.canManage && (
+        <Stack direction="row" spacing={1} sx={{ flexWrap: 'wrap' }}>
+          <Button variant="contained" startIcon={<Build />} onClick={() => setDialog('service')}>
+            Log a service
+          </Button>
+          <Button variant="outlined" startIcon={<Edit />} onClick={() => setDialog('edit')}>
+            Edit axe
+          </Button>
+        </Stack>
+      )}
+      <RackCautions screen="rack" />
+      <RackSection title="Head and handle">
+        <AxeSetup axe={axe} units={units} />
+        {axe.notes && <Typography sx={{ mt: 2 }}>{axe.notes}</Typography>}
+      </RackSection>
+      <RackSection title="Photos">
+        <AxePhotos axeId={axe.id} label={axe.label} photos={axe.photos} canManage={axe.canManage} />
+      </RackSection>
+      <RackSection title="Service history">
+        <ServiceHistory services={axe.services} units={units} label={axe.label} />
+      </RackSection>
+      <RackSection title="Results chopped with it">
+        <Typography sx={{ color: 'text.secondary' }}>Results posted with this axe will be listed here, each with the head setup it was chopped with.</Typography>
+      </RackSection>
+      <RackSection title="Trials run with it">
+        <Typography sx={{ color: 'text.secondary' }}>Trials that tested this axe on a block will be listed here.</Typography>
+      </RackSection>
+      {dialog === 'edit' && (
+        <AxeFormDialog clubId={axe.clubId} units={units} axe={axe} onClose={() => setDialog(null)} onSaved={() => { setDialog(null); setNotice(`${axe.label} saved.`); }} />
+      )}
+      {dialog === 'service' && <ServiceFormDialog axe={axe} units={units} today={today} onClose={() => setDialog(null)} onSaved={setNotice} />}
+      <Snackbar open={Boolean(notice)} autoHideDuration={6000} onClose={() => setNotice(undefined)} message={notice} sx={{ bottom: { xs: 'calc(80px + env(safe-area-inset-bottom))', sm: 24 } }} />
+    </Stack>
+  );
+}

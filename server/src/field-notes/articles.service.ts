@@ -16,6 +16,8 @@ import { toReviewModel, toRevisionModel } from './field-notes.mappers.js';
 import type { FieldNoteHistoryModel } from './models/field-note-history.model.js';
 import type { FieldNoteModel } from './models/field-note.model.js';
 
+const RESERVED_SLUGS = new Set(['new', 'review', 'mine']);
+
 /** Writing and reading Field Notes; every save is a new revision, so history is whole. */
 @Injectable()
 export class ArticlesService {
@@ -110,7 +112,9 @@ export class ArticlesService {
   }
 
   private async uniqueSlug(title: string): Promise<string> {
-    const base = slugify(title).slice(0, 90);
+    const slug = slugify(title).slice(0, 90);
+    // The client's own pages sit beside notes under /field-notes/.
+    const base = RESERVED_SLUGS.has(slug) ? `${slug}-note` : slug;
     const taken = await this.repo.slugsStartingWith(base);
     if (!taken.has(base)) return base;
     let n = 2;

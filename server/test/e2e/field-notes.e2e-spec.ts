@@ -107,7 +107,7 @@ describe('Field Notes: writing, review and publishing', () => {
   it('publishes for visitors, and keeps the published text live while a new revision is drafted', async () => {
     const note = await publishedNote(app, { coach, admin }, noteInput({ title: 'Published then revised' }));
     const visitor = await readNote(app, note.slug);
-    expect(visitor.data?.fieldNote).toMatchObject({ isPublished: true, isDraftView: false, canEdit: false, evidence: [expect.objectContaining({ href: '/grain-map?species=quaking-aspen&condition=GREEN&grind=CHISEL' })] });
+    expect(visitor.data?.fieldNote).toMatchObject({ isPublished: true, isDraftView: false, canEdit: false, evidence: [expect.objectContaining({ href: '/grain-map?species=quaking-aspen&condition=GREEN&cell=quaking-aspen~CHISEL' })] });
     const revised = await updateNote(app, coach, note.id, noteInput({ title: 'Published then revised, second go', note: 'clearer title' }));
     expect(revised.data?.updateFieldNote).toMatchObject({ status: 'DRAFT', revisionNumber: 2, hasUnpublishedChanges: true, isDraftView: true });
     expect((await readNote(app, note.slug)).data?.fieldNote.title).toBe('Published then revised');
@@ -118,6 +118,12 @@ describe('Field Notes: writing, review and publishing', () => {
       { number: 1, title: 'Published then revised', isPublished: true, note: '' },
     ]);
     expect(errorCode(await gql(app, 'query($id: ID!) { fieldNoteHistory(id: $id) { note { id } } }', { id: note.id }, { token: otherCoach }))).toBe('NOT_FOUND');
+  });
+
+  it('keeps a note called "Review" from taking the address of the review queue', async () => {
+    const { data } = await createNote(app, coach, noteInput({ title: 'Review' }));
+    // /field-notes/review is the review queue, so the note gets its own address.
+    expect(data?.createFieldNote.slug).toMatch(/^review-note(-\d+)?$/);
   });
 
   it('saves no new revision when nothing changed', async () => {

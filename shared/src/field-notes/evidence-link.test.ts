@@ -5,7 +5,7 @@ import { evidenceHref, grainMapHref } from './evidence-link.js';
 describe('evidence links', () => {
   it('points a Grain Map cell at its row with the grind and condition in the query', () => {
     expect(evidenceHref({ kind: 'GRAIN_CELL', refId: null, species: 'quaking-aspen', grind: 'CHISEL', condition: 'GREEN', label: 'cell', summary: '' })).toBe(
-      '/grain-map?species=quaking-aspen&condition=GREEN&grind=CHISEL',
+      '/grain-map?species=quaking-aspen&condition=GREEN&cell=quaking-aspen~CHISEL',
     );
   });
 

@@ -23,9 +23,10 @@ function withQuery(path: string, params: Record<string, string | null | undefine
   return text ? `${path}?${text}` : path;
 }
 
-/** The Grain Map row for a species (and condition), optionally one grind's cell in it. */
+/** The Grain Map row for a species (and condition); with a grind, that cell opened (the page's "species~grind"). */
 export function grainMapHref(cell: { species: string | null; condition?: string | null; grind?: string | null }): string {
-  return withQuery('/grain-map', { species: cell.species, condition: cell.condition, grind: cell.grind });
+  const open = cell.species && cell.grind ? `${cell.species}~${cell.grind}` : null;
+  return withQuery('/grain-map', { species: cell.species, condition: cell.condition, cell: open });
 }
 
 /** Where a piece of evidence is shown in the app. */

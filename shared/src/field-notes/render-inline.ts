@@ -2,6 +2,7 @@ import { escapeHtml, unescapeHtml } from './escape-html.js';
 import { safeImageSrc, safeLinkHref } from './safe-url.js';
 
 // NUL is stripped from every source before rendering, so a user can never forge a hole.
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const HOLE = /\u0000(\d+)\u0000/g;
 
 /** Finished HTML set aside while the rest of a line is still being parsed. */

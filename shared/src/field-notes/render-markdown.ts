@@ -9,6 +9,7 @@ const RULE = /^ {0,3}([-*_])(?: *\1){2,} *$/;
 // Blockquote markers are matched after escaping, so ">" arrives as "&gt;".
 const QUOTE = /^ {0,3}&gt; ?/;
 // Everything but tab and newline below U+0020 (NUL included, which the inline parser relies on).
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const CONTROLS = /[\u0000-\u0008\u000b-\u001f\u007f]/g;
 
 function startsBlock(line: string): boolean {

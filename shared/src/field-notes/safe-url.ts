@@ -1,5 +1,6 @@
 // Whitespace, controls, quotes, angle brackets, backslash and backtick never belong in a link we
 // print: browsers strip or reinterpret them (e.g. "java\tscript:"), so any of them refuses the URL.
+// eslint-disable-next-line no-control-regex -- matching control characters is the point
 const UNSAFE_CHARACTER = /[\u0000-\u0020\u007f-\u009f"'<>\\`]/u;
 const SCHEME = /^([a-z][a-z0-9+.-]*):/i;
 // Entity-shaped text ("&#106;", "&colon;") has no honest use in a link and is how schemes get smuggled.

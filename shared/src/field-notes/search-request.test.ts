@@ -16,6 +16,11 @@ describe('knowledgeSearchRequest', () => {
     expect(params.highlightPreTag).toBe('\uE000');
   });
 
+  it('sorts newest first only when there are no words to rank by', () => {
+    expect(knowledgeSearchRequest('').params.sort).toEqual(['publishedAt:desc']);
+    expect(knowledgeSearchRequest('aspen').params.sort).toBeUndefined();
+  });
+
   it('escapes quotes in a filter value', () => {
     expect(knowledgeSearchRequest('x', { event: ['a"b'] }).params.filter).toEqual([['event = "a\\"b"']]);
   });

@@ -15,6 +15,8 @@ export interface KnowledgeSearchRequest {
     highlightPreTag: string;
     highlightPostTag: string;
     matchingStrategy: 'frequency';
+    /** Newest first when there are no words to rank by. */
+    sort?: string[];
     limit: number;
     offset: number;
   };
@@ -35,9 +37,11 @@ export function knowledgeSearchRequest(question: string, selection: FacetSelecti
     const values = selection[facet] ?? [];
     return values.length ? [values.map((v) => `${facet} = ${quoted(v)}`)] : [];
   });
+  const q = questionWords(question);
   return {
-    q: questionWords(question),
+    q,
     params: {
+      ...(q.trim() === '' ? { sort: ['publishedAt:desc'] } : {}),
       filter,
       facets: [...SEARCH_FACETS],
       attributesToRetrieve: ['id', 'kind', 'slug', 'title', 'summary', 'url', 'species', 'grind', 'event', 'condition', 'evidence', 'authorName', 'publishedAt'],

@@ -24,13 +24,21 @@ const ClubPage = lazyPage(() => import('./routes/clubs/club-page.js'), 'ClubPage
 const AthletePage = lazyPage(() => import('./routes/clubs/athlete-page.js'), 'AthletePage');
 const JoinClubPage = lazyPage(() => import('./routes/clubs/join-club-page.js'), 'JoinClubPage');
 const GrainMapPage = lazyPage(() => import('./routes/grain-map/grain-map-page.js'), 'GrainMapPage');
+const FieldNotesPage = lazyPage(() => import('./routes/field-notes/field-notes-page.js'), 'FieldNotesPage');
+const FieldNotePage = lazyPage(() => import('./routes/field-notes/field-note-page.js'), 'FieldNotePage');
+const NewFieldNotePage = lazyPage(() => import('./routes/field-notes/field-note-editor-page.js'), 'NewFieldNotePage');
+const EditFieldNotePage = lazyPage(() => import('./routes/field-notes/field-note-editor-page.js'), 'EditFieldNotePage');
+const FieldNoteHistoryPage = lazyPage(() => import('./routes/field-notes/field-note-history-page.js'), 'FieldNoteHistoryPage');
+const MyFieldNotesPage = lazyPage(() => import('./routes/field-notes/field-note-lists-page.js'), 'MyFieldNotesPage');
+const FieldNotesReviewPage = lazyPage(() => import('./routes/field-notes/field-note-lists-page.js'), 'FieldNotesReviewPage');
+const FirstCutsPage = lazyPage(() => import('./routes/first-cuts/first-cuts-page.js'), 'FirstCutsPage');
 const RackPage = lazyPage(() => import('./routes/rack/rack-page.js'), 'RackPage');
 const AxePage = lazyPage(() => import('./routes/rack/axe-page.js'), 'AxePage');
 const GeometryPage = lazyPage(() => import('./routes/rack/geometry-page.js'), 'GeometryPage');
 const LineupPage = lazyPage(() => import('./routes/rack/lineup-page.js'), 'LineupPage');
 
 // Places still being built share one page; a built place joins this set and declares its own routes.
-const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack']);
+const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack', 'fieldNotes', 'firstCuts']);
 const placeRoutes: RouteObject[] = places.filter((place) => !builtPlaces.has(place.key)).map((place) => {
   const page = <ComingSoonPage placeKey={place.key} />;
   return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
@@ -83,6 +91,14 @@ export const routeTree: RouteObject[] = [
       { path: paths.rackAxe.path, element: <AxePage /> },
       { path: paths.rackGeometry.path, element: <GeometryPage /> },
       { path: paths.rackLineup.path, element: <RequireAuth><LineupPage /></RequireAuth> },
+      { path: paths.fieldNotes.path, element: <FieldNotesPage /> },
+      { path: paths.newFieldNote.path, element: <RequireAuth roles={['COACH']}><NewFieldNotePage /></RequireAuth> },
+      { path: paths.myFieldNotes.path, element: <RequireAuth roles={['COACH']}><MyFieldNotesPage /></RequireAuth> },
+      { path: paths.fieldNotesReview.path, element: <RequireAuth roles={['ADMIN']}><FieldNotesReviewPage /></RequireAuth> },
+      { path: paths.fieldNote.path, element: <FieldNotePage /> },
+      { path: paths.editFieldNote.path, element: <RequireAuth roles={['COACH']}><EditFieldNotePage /></RequireAuth> },
+      { path: paths.fieldNoteHistory.path, element: <RequireAuth><FieldNoteHistoryPage /></RequireAuth> },
+      { path: paths.firstCuts.path, element: <FirstCutsPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -58,4 +58,10 @@ export const paths = {
   athlete: { path: '/athletes/:athleteId', href: (athleteId: string) => `/athletes/${encodeURIComponent(athleteId)}` },
   /** The link in a club invitation e-mail (the server writes `/join-club?token=…`). */
   joinClub: { path: '/join-club', href: (token?: string) => withQuery('/join-club', { token }) },
+  fieldNote: { path: '/field-notes/:slug', href: (slug: string, options: { draft?: boolean } = {}) => withQuery(`/field-notes/${encodeURIComponent(slug)}`, { draft: options.draft ? '1' : undefined }) },
+  newFieldNote: place('/field-notes/new'),
+  editFieldNote: { path: '/field-notes/:slug/edit', href: (slug: string) => `/field-notes/${encodeURIComponent(slug)}/edit` },
+  fieldNoteHistory: { path: '/field-notes/:slug/history', href: (slug: string) => `/field-notes/${encodeURIComponent(slug)}/history` },
+  fieldNotesReview: place('/field-notes/review'),
+  myFieldNotes: place('/field-notes/mine'),
 } as const;

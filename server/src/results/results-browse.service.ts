@@ -28,8 +28,8 @@ export class ResultsBrowseService {
     const index = page?.page ?? 0;
     if (!Number.isInteger(pageSize) || pageSize < 1 || pageSize > MAX_PAGE_SIZE) throw DomainError.badInput('pageSize', `A page holds 1 to ${MAX_PAGE_SIZE} results.`);
     if (!Number.isInteger(index) || index < 0) throw DomainError.badInput('page', 'Pages count from 0.');
-    const { total, rows } = await this.explorer.search(filter ?? {}, sort ?? DEFAULT_SORT, index * pageSize, pageSize);
-    return { total, page: index, pageSize, rows: await this.hydrator.models(rows) };
+    const { total, capped, rows } = await this.explorer.search(filter ?? {}, sort ?? DEFAULT_SORT, index * pageSize, pageSize);
+    return { total, capped, page: index, pageSize, rows: await this.hydrator.models(rows) };
   }
 
   async *exportRows(filter: ExplorerFilter, sort: ExplorerSort | null): AsyncGenerator<ResultModel[]> {

@@ -28,6 +28,9 @@ export interface ExplorerSort {
   direction: 'ASC' | 'DESC';
 }
 
+/** Counting stops here; a filter matching more says so instead of counting on. */
+export const COUNT_CAP = 10_000;
+
 const SORT_COLUMN: Record<ExplorerSortField, string> = {
   TIME: 'r.total_hundredths',
   SCORE: 'r.score',
@@ -43,28 +46,56 @@ const SORT_COLUMN: Record<ExplorerSortField, string> = {
 export class ResultsExplorerRepository {
   constructor(@Inject(DataSource) readonly db: DataSource) {}
 
-  async search(filter: ExplorerFilter, sort: ExplorerSort, offset: number, limit: number): Promise<{ total: number; rows: ResultEntity[] }> {
-    const base = this.filtered(filter);
+  /**
+   * One page of results. Sorting follows an index (the column, then the id, in the same
+   * direction), and rows with an empty sort value come after the rest whichever the direction.
+   * The count stops at COUNT_CAP: counting every row of a broad filter costs more than the page.
+   */
+  async search(filter: ExplorerFilter, sort: ExplorerSort, offset: number, limit: number): Promise<{ total: number; capped: boolean; rows: ResultEntity[] }> {
+    const hidden = await this.hiddenMeetIds();
+    const [rows, count] = await Promise.all([this.page(filter, hidden, sort, offset, limit), this.count(filter, hidden)]);
+    return { ...count, rows };
+  }
+
+  private async page(filter: ExplorerFilter, hidden: readonly string[], sort: ExplorerSort, offset: number, limit: number): Promise<ResultEntity[]> {
     const column = SORT_COLUMN[sort.field];
-    const [rows, total] = await Promise.all([
-      base
-        .clone()
-        // Empty values (no time, no bevel recorded) go last whichever way the column sorts.
-        .orderBy(`${column} IS NULL`, 'ASC')
-        .addOrderBy(column, sort.direction)
-        .addOrderBy('r.id', 'ASC')
-        .offset(offset)
-        .limit(limit)
-        .getMany(),
-      base.clone().getCount(),
-    ]);
-    return { total, rows };
+    const ordered = (q: SelectQueryBuilder<ResultEntity>, by: string, direction: 'ASC' | 'DESC') =>
+      q.orderBy(by, direction).addOrderBy('r.id', direction);
+    const filled = await ordered(this.filtered(filter, hidden).andWhere(`${column} IS NOT NULL`), column, sort.direction).offset(offset).limit(limit).getMany();
+    if (filled.length === limit) return filled;
+    const valued = filled.length > 0 || offset === 0 ? offset + filled.length : await this.filtered(filter, hidden).andWhere(`${column} IS NOT NULL`).getCount();
+    const empty = await ordered(this.filtered(filter, hidden).andWhere(`${column} IS NULL`), 'r.id', 'ASC')
+      .offset(Math.max(0, offset - valued))
+      .limit(limit - filled.length)
+      .getMany();
+    return [...filled, ...empty];
+  }
+
+  /** Meets with results that visitors may not read yet (being run or taken back): few at a time. */
+  private async hiddenMeetIds(): Promise<string[]> {
+    const rows = await this.db.query<{ id: string }[]>(
+      'SELECT m.id FROM meets m WHERE m.status NOT IN (?) AND EXISTS (SELECT 1 FROM results r WHERE r.meet_id = m.id)',
+      [VISIBLE_STATUSES],
+    );
+    return rows.map((r) => r.id);
+  }
+
+  /** Matching rows up to the cap, less those of hidden meets (read through the meet index). */
+  private async count(filter: ExplorerFilter, hidden: readonly string[]): Promise<{ total: number; capped: boolean }> {
+    const [sql, parameters] = this.filtered(filter, []).select('1').limit(COUNT_CAP + 1).getQueryAndParameters();
+    const counted = await this.db.query<{ n: string }[]>(`SELECT COUNT(*) AS n FROM (${sql}) capped`, parameters);
+    const reached = Number(counted[0]?.n ?? 0);
+    if (reached > COUNT_CAP) return { total: COUNT_CAP, capped: true };
+    if (hidden.length === 0) return { total: reached, capped: false };
+    const inHidden = await this.filtered(filter, []).andWhere('r.meet_id IN (:...hidden)', { hidden }).getCount();
+    return { total: reached - inHidden, capped: false };
   }
 
   /** Every matching row, for the CSV export, in pages so memory stays flat. */
   async *each(filter: ExplorerFilter, sort: ExplorerSort, batch = 2000): AsyncGenerator<ResultEntity[]> {
+    const hidden = await this.hiddenMeetIds();
     for (let offset = 0; ; offset += batch) {
-      const { rows } = await this.search(filter, sort, offset, batch);
+      const rows = await this.page(filter, hidden, sort, offset, batch);
       if (rows.length === 0) return;
       yield rows;
       if (rows.length < batch) return;
@@ -77,7 +108,8 @@ export class ResultsExplorerRepository {
    * earlier result keeps a record it shares.
    */
   records(filter: Pick<ExplorerFilter, 'seasonId' | 'eventTypeId' | 'speciesId' | 'division'>): Promise<ResultEntity[]> {
-    const inner = this.filtered({ ...filter, finishedOnly: true })
+    const inner = this.filtered({ ...filter, finishedOnly: true }, [])
+      .innerJoin(MeetEntity, 'm', 'm.id = r.meet_id AND m.status IN (:...visible)', { visible: VISIBLE_STATUSES })
       .innerJoin(EventTypeEntity, 'et', 'et.id = r.event_type_id')
       .andWhere('r.place IS NOT NULL')
       .select('r.id', 'id')
@@ -98,11 +130,9 @@ export class ResultsExplorerRepository {
       .getMany();
   }
 
-  private filtered(f: ExplorerFilter): SelectQueryBuilder<ResultEntity> {
-    const q = this.db
-      .getRepository(ResultEntity)
-      .createQueryBuilder('r')
-      .innerJoin(MeetEntity, 'm', 'm.id = r.meet_id AND m.status IN (:...visible)', { visible: VISIBLE_STATUSES });
+  private filtered(f: ExplorerFilter, hidden: readonly string[]): SelectQueryBuilder<ResultEntity> {
+    const q = this.db.getRepository(ResultEntity).createQueryBuilder('r');
+    if (hidden.length) q.andWhere('r.meet_id NOT IN (:...hidden)', { hidden });
     const equal: [keyof ExplorerFilter, string][] = [
       ['seasonId', 'r.season_id'], ['meetId', 'r.meet_id'], ['clubId', 'r.club_id'], ['eventTypeId', 'r.event_type_id'],
       ['division', 'r.division'], ['speciesId', 'r.species_id'], ['grind', 'r.grind'], ['condition', 'r.block_condition'],

@@ -50,6 +50,24 @@ export class ResultsReadRepository {
     return map;
   }
 
+  /** A meet's entries with their athletes' full names, lean, for matching a sheet. */
+  async sheetEntries(meetId: string): Promise<{ id: string; meetEventId: string; clubId: string; athleteNames: string[] }[]> {
+    const rows = await this.db.query<{ id: string; meetEventId: string; clubId: string; name: string }[]>(
+      `SELECT e.id, e.meet_event_id AS meetEventId, e.club_id AS clubId, CONCAT(a.first_name, ' ', a.last_name) AS name
+         FROM entries e JOIN meet_events me ON me.id = e.meet_event_id
+         JOIN entry_athletes ea ON ea.entry_id = e.id JOIN athletes a ON a.id = ea.athlete_id
+        WHERE me.meet_id = ? ORDER BY e.id, ea.position`,
+      [meetId],
+    );
+    const entries = new Map<string, { id: string; meetEventId: string; clubId: string; athleteNames: string[] }>();
+    for (const row of rows) {
+      const entry = entries.get(row.id) ?? { id: row.id, meetEventId: row.meetEventId, clubId: row.clubId, athleteNames: [] };
+      entry.athleteNames.push(row.name);
+      entries.set(row.id, entry);
+    }
+    return [...entries.values()];
+  }
+
   clubsByIds(ids: readonly string[]): Promise<ClubEntity[]> {
     return ids.length ? this.db.getRepository(ClubEntity).findBy({ id: In([...ids]) }) : Promise.resolve([]);
   }

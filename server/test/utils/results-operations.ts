@@ -66,8 +66,8 @@ export function seasonStandings(app: INestApplication, seasonId: string, divisio
 }
 
 export function explore(app: INestApplication, filter: Record<string, unknown>, sort?: Record<string, unknown>, page?: Record<string, unknown>) {
-  return gql<{ results: { total: number; page: number; pageSize: number; rows: ResultShape[] } }>(
-    app, `query($f: ResultsFilter, $s: ResultsSort, $p: PageInput) { results(filter: $f, sort: $s, page: $p) { total page pageSize rows { ${RESULT} } } }`, { f: filter, s: sort, p: page });
+  return gql<{ results: { total: number; capped: boolean; page: number; pageSize: number; rows: ResultShape[] } }>(
+    app, `query($f: ResultsFilter, $s: ResultsSort, $p: PageInput) { results(filter: $f, sort: $s, page: $p) { total capped page pageSize rows { ${RESULT} } } }`, { f: filter, s: sort, p: page });
 }
 
 export function records(app: INestApplication, filter: Record<string, unknown>) {

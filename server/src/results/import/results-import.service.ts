@@ -45,7 +45,7 @@ export class ResultsImportService {
     const [events, clubs, entries, existingRows] = await Promise.all([
       this.meetsRepo.eventsOf(meetId),
       this.league.clubs.find(),
-      this.meetsRepo.entriesOfMeet(meetId),
+      this.read.sheetEntries(meetId),
       this.read.resultsOfMeet(meetId),
     ]);
     const matched = matchSheetRows(sheet.rows, {
@@ -53,10 +53,7 @@ export class ResultsImportService {
         id: e.id, code: e.eventType.code, name: e.eventType.name, division: e.division, kind: e.eventType.resultKind, speciesId: e.speciesId, diameterMm: e.diameterMm,
       })),
       clubs,
-      entries: entries.map((e) => ({
-        id: e.id, meetEventId: e.meetEventId, clubId: e.clubId,
-        athleteNames: (e.athletes ?? []).map((a) => `${a.athlete?.firstName ?? ''} ${a.athlete?.lastName ?? ''}`),
-      })),
+      entries,
     });
     if (!matched.ok) return matched;
     const axes = await this.read.axesOfClubs([...new Set(matched.rows.filter((r) => r.axeLabel).map((r) => r.clubId))]);

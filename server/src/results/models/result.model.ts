@@ -87,7 +87,8 @@ export class MeetResultsModel {
 
 @ObjectType('ResultsPage')
 export class ResultsPageModel {
-  @Field(() => Int) total: number;
+  @Field(() => Int, { description: 'Matching results, counted up to 10,000' }) total: number;
+  @Field(() => Boolean, { description: 'More results match than total: narrow the filter, or export them all' }) capped: boolean;
   @Field(() => Int) page: number;
   @Field(() => Int) pageSize: number;
   @Field(() => [ResultModel]) rows: ResultModel[];

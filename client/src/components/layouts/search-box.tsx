@@ -1,15 +1,34 @@
 import SearchIcon from '@mui/icons-material/Search';
 import InputBase from '@mui/material/InputBase';
 import Box from '@mui/material/Box';
-import { useState, type FormEvent } from 'react';
-import { useNavigate, useSearchParams } from 'react-router';
+import { useEffect, useState, type FormEvent } from 'react';
+import { useLocation, useNavigate, useSearchParams } from 'react-router';
+
 import { paths } from '../../config/paths.js';
 
-/** Header search: sends the words to the search page, which does the finding. */
+/** Header search: typing opens the search page, whose results follow the words as they are typed. */
 export function SearchBox() {
   const navigate = useNavigate();
   const [params] = useSearchParams();
   const [words, setWords] = useState(params.get('q') ?? '');
+  const onSearchPage = useLocation().pathname === paths.search.path;
+
+  // The search page has its own box; both show the words in the address.
+  useEffect(() => {
+    if (onSearchPage) setWords(params.get('q') ?? '');
+  }, [onSearchPage, params]);
+
+  const change = (next: string) => {
+    setWords(next);
+    if (onSearchPage) {
+      const query = new URLSearchParams(params);
+      if (next) query.set('q', next);
+      else query.delete('q');
+      void navigate({ search: query.toString() }, { replace: true });
+    } else if (next.trim()) {
+      void navigate(paths.search.href(next));
+    }
+  };
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
@@ -37,7 +56,7 @@ export function SearchBox() {
       <SearchIcon aria-hidden />
       <InputBase
         value={words}
-        onChange={(event) => setWords(event.target.value)}
+        onChange={(event) => change(event.target.value)}
         placeholder="Search"
         type="search"
         inputProps={{ 'aria-label': 'Search', enterKeyHint: 'search' }}

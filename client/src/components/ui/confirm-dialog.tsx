@@ -6,8 +6,8 @@ import DialogTitle from '@mui/material/DialogTitle';
 import Stack from '@mui/material/Stack';
 import { useId, useState, type ReactNode } from 'react';
 
-import { FormAlert } from '../../../components/ui/form-alert.js';
-import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
+import { FormAlert } from './form-alert.js';
+import { graphQLErrorDetails } from '../../lib/graphql-error-details.js';
 
 export interface ConfirmDialogProps {
   open: boolean;

@@ -5,7 +5,7 @@ import { Controller, type Control, type FieldValues, type Path } from 'react-hoo
 export interface SelectFieldProps<T extends FieldValues> extends Omit<TextFieldProps, 'name' | 'select' | 'value' | 'onChange' | 'error'> {
   control: Control<T>;
   name: Path<T>;
-  options: ReadonlyArray<{ value: string; label: string }>;
+  options: ReadonlyArray<{ value: string; label: string; disabled?: boolean }>;
 }
 
 /** A labelled drop-down bound to react-hook-form; its error replaces the hint and focus can be sent to it. */
@@ -27,7 +27,7 @@ export function SelectField<T extends FieldValues>({ control, name, options, hel
           helperText={fieldState.error?.message ?? helperText}
         >
           {options.map((option) => (
-            <MenuItem key={option.value} value={option.value}>
+            <MenuItem key={option.value} value={option.value} disabled={option.disabled ?? false}>
               {option.label}
             </MenuItem>
           ))}

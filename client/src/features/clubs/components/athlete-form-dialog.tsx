@@ -19,7 +19,7 @@ import { clubsDocuments } from '../api/clubs-documents.js';
 import type { Athlete } from '../api/types.js';
 import { ATHLETE_FORM_FIELDS, athleteFormDefaults, athleteFormSchema, toAthleteInput, type AthleteFormValues } from '../schemas/athlete-form-schema.js';
 import { RemoveAthleteStep } from './remove-athlete-step.js';
-import { ToggleField } from './toggle-field.js';
+import { ToggleField } from '../../../components/ui/toggle-field.js';
 
 export interface AthleteFormDialogProps {
   clubId: string;

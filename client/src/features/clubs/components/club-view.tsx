@@ -3,15 +3,15 @@ import PersonAdd from '@mui/icons-material/PersonAdd';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
-import Paper from '@mui/material/Paper';
-import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { useState, type ReactNode } from 'react';
+import { useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 
+import { NoticeToast } from '../../../components/ui/notice-toast.js';
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { PageLoading } from '../../../components/ui/page-loading.js';
+import { SectionCard } from '../../../components/ui/section-card.js';
 import { paths } from '../../../config/paths.js';
 import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
 import { clubsDocuments } from '../api/clubs-documents.js';
@@ -21,18 +21,6 @@ import { ClubColours } from './club-colours.js';
 import { InvitationsList } from './invitations-list.js';
 import { InviteForm } from './invite-form.js';
 import { RosterGrid } from './roster-grid.js';
-
-function Section({ title, action, children }: { title: string; action?: ReactNode; children: ReactNode }) {
-  return (
-    <Paper component="section" variant="outlined" aria-label={title} sx={{ p: { xs: 2, sm: 3 } }}>
-      <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between', gap: 1, mb: 2, flexWrap: 'wrap' }}>
-        <Typography variant="h2">{title}</Typography>
-        {action}
-      </Stack>
-      {children}
-    </Paper>
-  );
-}
 
 export function ClubView({ clubId }: { clubId: string }) {
   const { data, loading, error } = useQuery(clubsDocuments.club, { variables: { id: clubId } });
@@ -61,7 +49,7 @@ export function ClubView({ clubId }: { clubId: string }) {
           Contact: <Link href={`mailto:${club.contactEmail}`}>{club.contactEmail}</Link>
         </Typography>
       )}
-      <Section
+      <SectionCard
         title={`Roster (${club.roster.length})`}
         action={
           club.canManage && (
@@ -80,9 +68,9 @@ export function ClubView({ clubId }: { clubId: string }) {
         ) : (
           <RosterGrid roster={club.roster} onEdit={club.canManage ? (athlete) => setEditing({ athlete }) : undefined} />
         )}
-      </Section>
+      </SectionCard>
       {club.canManage && (
-        <Section title="Invite to the club">
+        <SectionCard title="Invite to the club">
           <Stack spacing={3}>
             <InviteForm clubId={club.id} clubName={club.name} />
             <div>
@@ -92,17 +80,10 @@ export function ClubView({ clubId }: { clubId: string }) {
               <InvitationsList clubId={club.id} />
             </div>
           </Stack>
-        </Section>
+        </SectionCard>
       )}
       {editing && <AthleteFormDialog clubId={club.id} athlete={editing.athlete} onClose={() => setEditing(null)} onDone={setNotice} />}
-      <Snackbar
-        open={Boolean(notice)}
-        autoHideDuration={6000}
-        onClose={() => setNotice(undefined)}
-        message={notice}
-        // Above the phone's bottom bar, not over it.
-        sx={{ bottom: { xs: 'calc(80px + env(safe-area-inset-bottom))', sm: 24 } }}
-      />
+      <NoticeToast message={notice} onClose={() => setNotice(undefined)} />
     </Stack>
   );
 }

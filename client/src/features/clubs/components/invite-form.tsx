@@ -11,7 +11,7 @@ import { EmailField } from '../../../components/ui/email-field.js';
 import { FormAlert } from '../../../components/ui/form-alert.js';
 import { applyServerErrors } from '../../../lib/apply-server-errors.js';
 import { clubsDocuments } from '../api/clubs-documents.js';
-import { ToggleField } from './toggle-field.js';
+import { ToggleField } from '../../../components/ui/toggle-field.js';
 
 const schema = z.object({
   email: z.string().trim().min(1, 'Enter their e-mail address.').pipe(z.email({ error: 'That does not look like an e-mail address.' })),

@@ -12,7 +12,7 @@ import { applyServerErrors } from '../../../lib/apply-server-errors.js';
 import { meetsDocuments } from '../api/meets-documents.js';
 import type { MeetEvent } from '../api/types.js';
 import { eventTitle } from '../lib/event-title.js';
-import { FormDialog } from './form-dialog.js';
+import { FormDialog } from '../../../components/ui/form-dialog.js';
 
 // Limits from the server (server/src/meets/meet-events.service.ts).
 const schema = z.object({

@@ -15,7 +15,7 @@ import { meetsDocuments } from '../api/meets-documents.js';
 import type { ClubOption, MeetEvent } from '../api/types.js';
 import { eventTitle } from '../lib/event-title.js';
 import { AthleteChecklist } from './athlete-checklist.js';
-import { FormDialog } from './form-dialog.js';
+import { FormDialog } from '../../../components/ui/form-dialog.js';
 
 export interface EntryPickerDialogProps {
   event: MeetEvent;

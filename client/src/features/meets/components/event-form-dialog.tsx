@@ -12,8 +12,8 @@ import { applyEventServerErrors } from '../lib/apply-event-server-errors.js';
 import { formatDiameter } from '../lib/format-diameter.js';
 import { eventFormDefaults, eventFormSchema, toMeetEventInput, type EventFormValues } from '../schemas/event-form-schema.js';
 import { DiameterField } from './diameter-field.js';
-import { FormDialog } from './form-dialog.js';
-import { SelectField } from './select-field.js';
+import { FormDialog } from '../../../components/ui/form-dialog.js';
+import { SelectField } from '../../../components/ui/select-field.js';
 
 export interface EventFormDialogProps {
   meet: MeetDetail;

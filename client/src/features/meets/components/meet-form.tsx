@@ -14,9 +14,9 @@ import { SubmitButton } from '../../../components/ui/submit-button.js';
 import { applyServerErrors } from '../../../lib/apply-server-errors.js';
 import type { ClubOption, Season } from '../api/types.js';
 import { MEET_FORM_FIELDS, meetFormSchema, type MeetFormValues } from '../schemas/meet-form-schema.js';
-import { CheckboxGroupField } from './checkbox-group-field.js';
+import { CheckboxGroupField } from '../../../components/ui/checkbox-group-field.js';
 import { MeetScoringFields } from './meet-scoring-fields.js';
-import { SelectField } from './select-field.js';
+import { SelectField } from '../../../components/ui/select-field.js';
 
 export interface MeetFormProps {
   defaults: MeetFormValues;

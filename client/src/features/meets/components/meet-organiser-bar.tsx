@@ -11,7 +11,7 @@ import { meetsDocuments } from '../api/meets-documents.js';
 import type { MeetDetail } from '../api/types.js';
 import type { MeetActions } from '../lib/meet-actions.js';
 import { statusMoves, type StatusMove } from '../lib/status-moves.js';
-import { ConfirmDialog } from './confirm-dialog.js';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.js';
 
 export interface MeetOrganiserBarProps {
   meet: MeetDetail;

@@ -76,4 +76,19 @@ describe('MeetView', () => {
     expect(await screen.findByText(/The entry deadline has passed/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: /Enter athletes/ })).not.toBeInTheDocument();
   });
+
+  it('links a coach whose club has entries to that club\'s lineup', async () => {
+    const withEntries = testMeetEvent({ entries: [entry('e1', 'Rowan Tamarack', 'HPINE', 1, 1), entry('e2', 'Wren Ashgrove', 'TRIDGE', 2, 1)] });
+    renderMeet(testMeet({ events: [withEntries], enterableClubIds: ['club-HPINE'] }));
+    const link = await screen.findByRole('link', { name: 'Lineup and axes' });
+    // hand-worked: paths.rackLineup.href('meet-1', 'club-HPINE') puts the club in the query string
+    expect(link).toHaveAttribute('href', '/rack/lineups/meet-1?club=club-HPINE');
+  });
+
+  it('offers no lineup link to a coach whose club has no entries yet', async () => {
+    const withEntries = testMeetEvent({ entries: [entry('e2', 'Wren Ashgrove', 'TRIDGE', 2, 1)] });
+    renderMeet(testMeet({ events: [withEntries], enterableClubIds: ['club-HPINE'] }));
+    expect(await screen.findByText('Wren Ashgrove')).toBeInTheDocument();
+    expect(screen.queryByRole('link', { name: /Lineup and axes/ })).not.toBeInTheDocument();
+  });
 });

@@ -4,12 +4,12 @@ import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
-import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useEffect, useState } from 'react';
 import { Link as RouterLink, useLocation, useNavigate } from 'react-router';
 
+import { NoticeToast } from '../../../components/ui/notice-toast.js';
 import { PageLoading } from '../../../components/ui/page-loading.js';
 import { paths } from '../../../config/paths.js';
 import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
@@ -17,11 +17,12 @@ import { meetsDocuments } from '../api/meets-documents.js';
 import type { Entry, MeetEvent, UnitPreference } from '../api/types.js';
 import { eventTitle } from '../lib/event-title.js';
 import { meetActions } from '../lib/meet-actions.js';
-import { ConfirmDialog } from './confirm-dialog.js';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.js';
 import { DrawOrderDialog } from './draw-order-dialog.js';
 import { EnterHint } from './enter-hint.js';
 import { EntryPickerDialog } from './entry-picker-dialog.js';
 import { EventFormDialog } from './event-form-dialog.js';
+import { LineupLinks } from './lineup-links.js';
 import { MeetDaySafety } from './meet-day-safety.js';
 import type { MeetPageState } from './meet-builder.js';
 import { MeetEventCard } from './meet-event-card.js';
@@ -82,6 +83,7 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
       <MeetHeader meet={meet} />
       {meet.canManage && <MeetOrganiserBar meet={meet} actions={actions} onNotice={setNotice} />}
       {enterable.length > 0 && <EnterHint meet={meet} clubs={clubs} />}
+      <LineupLinks meet={meet} />
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', md: 'minmax(0, 2fr) minmax(0, 1fr)' }, alignItems: 'start' }}>
         <Stack component="section" aria-labelledby="meet-events" spacing={2}>
           <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between', gap: 1, flexWrap: 'wrap' }}>
@@ -157,14 +159,7 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
           {dialog.entry.label} ({dialog.entry.clubName}) will no longer compete in {eventTitle(dialog.event)}.
         </ConfirmDialog>
       )}
-      <Snackbar
-        open={Boolean(notice)}
-        autoHideDuration={6000}
-        onClose={() => setNotice(undefined)}
-        message={notice}
-        // Above the phone's bottom bar, not over it.
-        sx={{ bottom: { xs: 'calc(80px + env(safe-area-inset-bottom))', sm: 24 } }}
-      />
+      <NoticeToast message={notice} onClose={() => setNotice(undefined)} />
     </Stack>
   );
 }

@@ -10,7 +10,7 @@ import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
 import { rackDocuments } from '../api/rack-documents.js';
 import type { Axe, ExperienceLevel, LineupEntry } from '../api/types.js';
 import { OUT_OF_USE, STATUS_LABELS, USE_LABELS } from '../lib/rack-labels.js';
-import { RackDialog } from './rack-dialog.js';
+import { FormDialog } from '../../../components/ui/form-dialog.js';
 
 const RANK: Record<ExperienceLevel, number> = { ROOKIE: 0, DEVELOPING: 1, EXPERIENCED: 2 };
 const LEAST: Record<Axe['allowedFor'], number> = { ANYONE: 0, DEVELOPING_UP: 1, EXPERIENCED_ONLY: 2 };
@@ -52,7 +52,7 @@ export function AssignDialog({ clubId, entry, onClose, onAssigned }: AssignDialo
   const other = errors.filter((e) => !['athleteId', 'axeId', 'overrideReason'].includes(e.field ?? '')).map((e) => e.message).join(' ');
 
   return (
-    <RackDialog title={`Lineup: ${entry.eventName}`} onClose={onClose} onSubmit={(event) => void submit(event)} submitLabel="Save" submitting={loading}>
+    <FormDialog fullScreenOnPhone title={`Lineup: ${entry.eventName}`} onClose={onClose} onSubmit={(event) => void submit(event)} submitLabel="Save" submitting={loading}>
       <FormAlert message={other || undefined} />
       <TextField select label="Athlete" value={athleteId} onChange={(event) => setAthleteId(event.target.value)} error={Boolean(errorFor('athleteId'))} helperText={errorFor('athleteId') ?? ' '}>
         {entry.athletes.map((a) => (
@@ -85,6 +85,6 @@ export function AssignDialog({ clubId, entry, onClose, onAssigned }: AssignDialo
           slotProps={{ htmlInput: { maxLength: 300 } }}
         />
       )}
-    </RackDialog>
+    </FormDialog>
   );
 }

@@ -16,8 +16,8 @@ import { AXE_STATUSES, AXE_USES, GRIND_HINTS, GRIND_LABELS, GRINDS, STATUS_LABEL
 import { lengthForForm, lengthToMm, massForForm, massToGrams, readNumber, unitWords } from '../lib/setup-units.js';
 import { AXE_SERVER_FIELDS, axeFormDefaults, axeFormSchema, toAxeInput, type AxeFormValues } from '../schemas/axe-form-schema.js';
 import { RackCheck } from './rack-check.js';
-import { RackDialog } from './rack-dialog.js';
-import { RackSelect } from './rack-select.js';
+import { FormDialog } from '../../../components/ui/form-dialog.js';
+import { SelectField } from '../../../components/ui/select-field.js';
 
 export interface AxeFormDialogProps {
   clubId: string;
@@ -77,7 +77,7 @@ export function AxeFormDialog({ clubId, units: preferred, axe, onClose, onSaved 
 
   const field = (name: keyof AxeFormValues) => ({ registration: register(name), fieldError: formState.errors[name] });
   return (
-    <RackDialog title={axe ? `Edit ${axe.label}` : 'Add an axe'} onClose={onClose} onSubmit={submit} submitLabel={axe ? 'Save' : 'Add axe'} submitting={formState.isSubmitting}>
+    <FormDialog fullScreenOnPhone title={axe ? `Edit ${axe.label}` : 'Add an axe'} onClose={onClose} onSubmit={submit} submitLabel={axe ? 'Save' : 'Add axe'} submitting={formState.isSubmitting}>
       <FormAlert message={alert} />
       <ToggleButtonGroup exclusive size="small" color="primary" aria-label="Units for this form" value={units} onChange={(_event, next: UnitPreference | null) => next && switchUnits(next)}>
         <ToggleButton value="METRIC">mm and kg</ToggleButton>
@@ -87,7 +87,7 @@ export function AxeFormDialog({ clubId, units: preferred, axe, onClose, onSaved 
         <FormTextField label="Label" autoComplete="off" {...field('label')} helperText="What the club calls it, e.g. Race 3" />
         <FormTextField label="Maker (optional)" autoComplete="off" {...field('maker')} />
       </Stack>
-      <RackSelect control={control} name="grind" label="Grind" options={GRINDS.map((g) => ({ value: g, label: GRIND_LABELS[g] }))} helperText={GRIND_HINTS[grind]} />
+      <SelectField control={control} name="grind" label="Grind" options={GRINDS.map((g) => ({ value: g, label: GRIND_LABELS[g] }))} helperText={GRIND_HINTS[grind]} />
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2.5}>
         <FormTextField
           label="Bevel, included angle (optional)"
@@ -117,10 +117,10 @@ export function AxeFormDialog({ clubId, units: preferred, axe, onClose, onSaved 
         <RackCheck control={control} name="isPublic" label="Show outside the club" />
       </Stack>
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2.5}>
-        <RackSelect control={control} name="status" label="Status" options={AXE_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))} />
-        <RackSelect control={control} name="allowedFor" label="Who may use it" options={AXE_USES.map((u) => ({ value: u, label: USE_LABELS[u] }))} />
+        <SelectField control={control} name="status" label="Status" options={AXE_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))} />
+        <SelectField control={control} name="allowedFor" label="Who may use it" options={AXE_USES.map((u) => ({ value: u, label: USE_LABELS[u] }))} />
       </Stack>
       <FormTextField label="Notes (optional)" multiline minRows={2} {...field('notes')} />
-    </RackDialog>
+    </FormDialog>
   );
 }

@@ -1,17 +1,11 @@
 import { describe, expect, it } from '@jest/globals';
-import { QueryClientProvider } from '@tanstack/react-query';
 import { screen, within } from '@testing-library/react';
-import type { ReactElement } from 'react';
 
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { rackDocuments } from '../api/rack-documents.js';
 import type { AxeDetail } from '../api/types.js';
 import { testAxe } from '../testing/rack-fixtures.js';
-import { createQueryClient } from '../../../lib/query-client.js';
 import { AxeView } from './axe-view.js';
-
-// The photo upload is a REST call owned by TanStack Query, which the shared test render leaves out.
-const withQueries = (element: ReactElement) => <QueryClientProvider client={createQueryClient()}>{element}</QueryClientProvider>;
 
 const detail = (over: Partial<AxeDetail> = {}): AxeDetail =>
   ({
@@ -37,7 +31,7 @@ const axeMock = (axe: AxeDetail) => ({ request: { query: rackDocuments.axe, vari
 
 describe('AxeView', () => {
   it('shows both bevel angles, the shoulder thickness and the service history in the reader\'s units', async () => {
-    renderWithProviders({ element: withQueries(<AxeView axeId="axe-race-3" units="IMPERIAL" today="2026-11-30" />), mocks: [axeMock(detail())] });
+    renderWithProviders({ element: <AxeView axeId="axe-race-3" units="IMPERIAL" today="2026-11-30" />, mocks: [axeMock(detail())] });
     const setup = await screen.findByRole('region', { name: 'Head and handle' });
     expect(within(setup).getByText('15°')).toBeInTheDocument();
     expect(within(setup).getByText('7.5°')).toBeInTheDocument();
@@ -53,7 +47,7 @@ describe('AxeView', () => {
   it('logs a regrind with the new bevel, after showing the cautions for the grinder', async () => {
     const logged = detail({ geometry: { includedAngleDeg: 16, perSideAngleDeg: 8, chiselWidthMm: 19.05, shoulderThicknessMm: 5.355 } as AxeDetail['geometry'] });
     const { user } = renderWithProviders({
-      element: withQueries(<AxeView axeId="axe-race-3" units="METRIC" today="2026-11-30" />),
+      element: <AxeView axeId="axe-race-3" units="METRIC" today="2026-11-30" />,
       mocks: [
         axeMock(detail()),
         {

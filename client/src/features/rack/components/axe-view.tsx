@@ -21,7 +21,7 @@ import { AxePhotos } from './axe-photos.js';
 import { AxeSetup } from './axe-setup.js';
 import { AxeStatusChip } from './axe-status-chip.js';
 import { RackCautions } from './rack-cautions.js';
-import { RackSection } from './rack-section.js';
+import { SectionCard } from '../../../components/ui/section-card.js';
 import { ServiceFormDialog } from './service-form-dialog.js';
 import { ServiceHistory } from './service-history.js';
 
@@ -70,22 +70,22 @@ export function AxeView({ axeId, units, today }: AxeViewProps) {
         </Stack>
       )}
       <RackCautions screen="rack" />
-      <RackSection title="Head and handle">
+      <SectionCard title="Head and handle">
         <AxeSetup axe={axe} units={units} />
         {axe.notes && <Typography sx={{ mt: 2 }}>{axe.notes}</Typography>}
-      </RackSection>
-      <RackSection title="Photos">
+      </SectionCard>
+      <SectionCard title="Photos">
         <AxePhotos axeId={axe.id} label={axe.label} photos={axe.photos} canManage={axe.canManage} />
-      </RackSection>
-      <RackSection title="Service history">
+      </SectionCard>
+      <SectionCard title="Service history">
         <ServiceHistory services={axe.services} units={units} label={axe.label} />
-      </RackSection>
-      <RackSection title="Results chopped with it">
+      </SectionCard>
+      <SectionCard title="Results chopped with it">
         <Typography sx={{ color: 'text.secondary' }}>Results posted with this axe will be listed here, each with the head setup it was chopped with.</Typography>
-      </RackSection>
-      <RackSection title="Trials run with it">
+      </SectionCard>
+      <SectionCard title="Trials run with it">
         <Typography sx={{ color: 'text.secondary' }}>Trials that tested this axe on a block will be listed here.</Typography>
-      </RackSection>
+      </SectionCard>
       {dialog === 'edit' && (
         <AxeFormDialog clubId={axe.clubId} units={units} axe={axe} onClose={() => setDialog(null)} onSaved={() => { setDialog(null); setNotice(`${axe.label} saved.`); }} />
       )}

@@ -9,7 +9,7 @@ import { useState } from 'react';
 
 import type { UnitPreference } from '../api/types.js';
 import { readNumber } from '../lib/setup-units.js';
-import { RackSection } from './rack-section.js';
+import { SectionCard } from '../../../components/ui/section-card.js';
 
 type Unit = 'mm' | 'in';
 const toMm = (value: number, unit: Unit) => (unit === 'in' ? inchesToMm(value) : value);
@@ -89,7 +89,7 @@ export function GeometryCalculator({ units }: { units: UnitPreference }) {
         <Toggle label="Length unit" value={unit} options={[['mm', 'mm'], ['in', 'in']]} onChange={setUnit} />
         <Toggle label="How the width is measured" value={measure} options={[['back-from-edge', 'Straight back from the edge'], ['along-face', 'Along the face']]} onChange={setMeasure} />
       </Stack>
-      <RackSection title="Thickness at the chisel shoulder">
+      <SectionCard title="Thickness at the chisel shoulder">
         <Stack spacing={2}>
           <Toggle label="The angle is" value={angleIs} options={[['included', 'Included (both faces)'], ['per-side', 'Per side (one face)']]} onChange={setAngleIs} />
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
@@ -100,8 +100,8 @@ export function GeometryCalculator({ units }: { units: UnitPreference }) {
             {forward}
           </Typography>
         </Stack>
-      </RackSection>
-      <RackSection title="Included angle from a thickness">
+      </SectionCard>
+      <SectionCard title="Included angle from a thickness">
         <Stack spacing={2}>
           <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2}>
             <NumberBox label="Thickness" value={thickness} onChange={setThickness} unit={unit} />
@@ -111,7 +111,7 @@ export function GeometryCalculator({ units }: { units: UnitPreference }) {
             {backward}
           </Typography>
         </Stack>
-      </RackSection>
+      </SectionCard>
       <Typography variant="body2" sx={{ color: 'text.secondary' }}>
         For a symmetric bit, taking the edge as a sharp line. The included angle is across both faces; the per-side
         angle is each face against the bit&apos;s centre plane, half the included angle.

@@ -4,14 +4,14 @@ import ListItem from '@mui/material/ListItem';
 import Typography from '@mui/material/Typography';
 
 import { rackDocuments } from '../api/rack-documents.js';
-import { RackSection } from './rack-section.js';
+import { SectionCard } from '../../../components/ui/section-card.js';
 
 /** The record of every experience override given for this meet, newest first. */
 export function LineupOverrides({ meetId, clubId }: { meetId: string; clubId: string }) {
   const { data } = useQuery(rackDocuments.lineupOverrides, { variables: { meetId, clubId }, fetchPolicy: 'cache-and-network' });
   const overrides = data?.lineupOverrides ?? [];
   return (
-    <RackSection title="Overrides on record">
+    <SectionCard title="Overrides on record">
       {overrides.length === 0 ? (
         <Typography sx={{ color: 'text.secondary' }}>No axe has been handed to an athlete below its experience rule for this meet.</Typography>
       ) : (
@@ -26,6 +26,6 @@ export function LineupOverrides({ meetId, clubId }: { meetId: string; clubId: st
           ))}
         </List>
       )}
-    </RackSection>
+    </SectionCard>
   );
 }

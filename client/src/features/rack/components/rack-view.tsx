@@ -22,7 +22,7 @@ import { ClubMeets } from './club-meets.js';
 import { RackCautions } from './rack-cautions.js';
 import { RackFilters } from './rack-filters.js';
 import { RackGrid } from './rack-grid.js';
-import { RackSection } from './rack-section.js';
+import { SectionCard } from '../../../components/ui/section-card.js';
 
 export interface RackViewProps {
   /** The caller's clubs (memberships); the first is shown unless the address names another. */
@@ -64,7 +64,7 @@ export function RackView({ memberClubs, anyClub, units }: RackViewProps) {
       <PageHeading lead={rack ? `${rack.clubName}: the club's axes, their setup and service history.` : undefined}>Rack</PageHeading>
       {picker}
       <RackCautions screen="rack" />
-      <RackSection
+      <SectionCard
         title="Axes"
         action={
           <Stack direction="row" spacing={1}>
@@ -103,11 +103,11 @@ export function RackView({ memberClubs, anyClub, units }: RackViewProps) {
             <RackGrid axes={rack.axes} units={units} />
           )}
         </Stack>
-      </RackSection>
+      </SectionCard>
       {rack?.isMember && (
-        <RackSection title="Lineups">
+        <SectionCard title="Lineups">
           <ClubMeets clubId={filter.clubId} />
-        </RackSection>
+        </SectionCard>
       )}
       {adding && rack && (
         <AxeFormDialog clubId={rack.clubId} units={units} onClose={() => setAdding(false)} onSaved={(axe) => void navigate(paths.rackAxe.href(axe.id))} />

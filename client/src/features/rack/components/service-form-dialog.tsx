@@ -15,8 +15,8 @@ import { AXE_STATUSES, GRIND_LABELS, GRINDS, SERVICE_KINDS, SERVICE_LABELS, STAT
 import { unitWords } from '../lib/setup-units.js';
 import { SERVICE_SERVER_FIELDS, SETUP_BOXES, serviceFormDefaults, serviceFormSchema, toServiceInput, type ServiceFormValues } from '../schemas/service-form-schema.js';
 import { RackCautions } from './rack-cautions.js';
-import { RackDialog } from './rack-dialog.js';
-import { RackSelect } from './rack-select.js';
+import { FormDialog } from '../../../components/ui/form-dialog.js';
+import { SelectField } from '../../../components/ui/select-field.js';
 
 export interface ServiceFormDialogProps {
   axe: AxeDetail;
@@ -57,11 +57,11 @@ export function ServiceFormDialog({ axe, units, today, onClose, onSaved }: Servi
   const field = (name: keyof ServiceFormValues) => ({ registration: register(name), fieldError: formState.errors[name] });
 
   return (
-    <RackDialog title={`Log a service: ${axe.label}`} onClose={onClose} onSubmit={submit} submitLabel="Log service" submitting={formState.isSubmitting}>
+    <FormDialog fullScreenOnPhone title={`Log a service: ${axe.label}`} onClose={onClose} onSubmit={submit} submitLabel="Log service" submitting={formState.isSubmitting}>
       <RackCautions screen="service" />
       <FormAlert message={alert} />
       <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2.5}>
-        <RackSelect control={control} name="kind" label="Work done" options={SERVICE_KINDS.map((k) => ({ value: k, label: SERVICE_LABELS[k] }))} />
+        <SelectField control={control} name="kind" label="Work done" options={SERVICE_KINDS.map((k) => ({ value: k, label: SERVICE_LABELS[k] }))} />
         <FormTextField label="Date" type="date" {...field('doneOn')} slotProps={{ inputLabel: { shrink: true } }} />
       </Stack>
       <FormTextField label="Done by (optional)" autoComplete="off" {...field('doneBy')} helperText="Leave empty for yourself" />
@@ -72,7 +72,7 @@ export function ServiceFormDialog({ axe, units, today, onClose, onSaved }: Servi
           Setup after the work <Typography component="span" sx={{ color: 'text.secondary' }}>(leave a box empty if it did not change)</Typography>
         </Typography>
       )}
-      {boxes.has('grind') && <RackSelect control={control} name="grind" label="Grind" options={[UNCHANGED, ...GRINDS.map((g) => ({ value: g, label: GRIND_LABELS[g] }))]} />}
+      {boxes.has('grind') && <SelectField control={control} name="grind" label="Grind" options={[UNCHANGED, ...GRINDS.map((g) => ({ value: g, label: GRIND_LABELS[g] }))]} />}
       {boxes.has('bevelIncluded') && (
         <Stack direction={{ xs: 'column', sm: 'row' }} spacing={2.5}>
           <FormTextField label="New bevel, included angle" {...field('bevelIncluded')} helperText="Across both faces; per side is half of it" slotProps={decimal('°')} />
@@ -85,10 +85,10 @@ export function ServiceFormDialog({ axe, units, today, onClose, onSaved }: Servi
           <FormTextField label="Handle wood" {...field('handleWood')} />
         </Stack>
       )}
-      {boxes.has('hangChecked') && <RackSelect control={control} name="hangChecked" label="Hang checked" options={YES_NO} />}
-      {boxes.has('pinned') && <RackSelect control={control} name="pinned" label="Pinned" options={YES_NO} />}
-      {boxes.has('status') && <RackSelect control={control} name="status" label="Status after the work" options={[UNCHANGED, ...AXE_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))]} />}
+      {boxes.has('hangChecked') && <SelectField control={control} name="hangChecked" label="Hang checked" options={YES_NO} />}
+      {boxes.has('pinned') && <SelectField control={control} name="pinned" label="Pinned" options={YES_NO} />}
+      {boxes.has('status') && <SelectField control={control} name="status" label="Status after the work" options={[UNCHANGED, ...AXE_STATUSES.map((s) => ({ value: s, label: STATUS_LABELS[s] }))]} />}
       <FormTextField label="Notes (optional)" multiline minRows={2} {...field('notes')} />
-    </RackDialog>
+    </FormDialog>
   );
 }

@@ -4,6 +4,7 @@ import { speciesById } from '@endgrain/shared';
 import { DivisionEnum } from '../league/models/league.enums.js';
 import type { EventTypeEntity } from '../meets/entities/event-type.entity.js';
 import { ResultKindEnum } from '../meets/models/meets.enums.js';
+import { GrindEnum } from '../rack/models/rack.enums.js';
 import type { ResultEntity } from './entities/result.entity.js';
 import type { ResultModel } from './models/result.model.js';
 import { BlockConditionEnum, ResultStatusEnum } from './models/results.enums.js';
@@ -65,7 +66,7 @@ export class ResultHydrator {
         runOffRank: r.runOffRank,
         axeId: r.axeId,
         axeLabel: r.axeLabel,
-        grind: r.grind,
+        grind: r.grind ? GrindEnum[r.grind] : null,
         bevelIncludedDeg: r.bevelIncludedDeg,
         chiselWidthMm: r.chiselWidthMm,
         speciesId: r.speciesId,

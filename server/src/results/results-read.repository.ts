@@ -136,17 +136,11 @@ export class ResultsReadRepository {
 
   private async axes(where: string, params: unknown[]): Promise<AxeSetup[]> {
     type Row = { id: string; clubId: string; label: string; grind: AxeSetup['grind']; bevel: string | null; chisel: string | null };
-    try {
-      const rows = await this.db.query<Row[]>(
-        `SELECT id, club_id AS clubId, label, grind, bevel_included_deg AS bevel, chisel_width_mm AS chisel FROM axes WHERE ${where}`,
-        params,
-      );
-      return rows.map((r) => ({ id: r.id, clubId: r.clubId, label: r.label, grind: r.grind, bevelIncludedDeg: decimalOrNull(r.bevel), chiselWidthMm: decimalOrNull(r.chisel) }));
-    } catch (error) {
-      // A database without the Rack's tables has no axes: typed setups still work.
-      if ((error as { code?: string }).code === 'ER_NO_SUCH_TABLE') return [];
-      throw error;
-    }
+    const rows = await this.db.query<Row[]>(
+      `SELECT id, club_id AS clubId, label, grind, bevel_included_deg AS bevel, chisel_width_mm AS chisel FROM axes WHERE ${where}`,
+      params,
+    );
+    return rows.map((r) => ({ id: r.id, clubId: r.clubId, label: r.label, grind: r.grind, bevelIncludedDeg: decimalOrNull(r.bevel), chiselWidthMm: decimalOrNull(r.chisel) }));
   }
 }
 

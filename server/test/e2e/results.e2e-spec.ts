@@ -3,9 +3,10 @@ import type { INestApplication } from '@nestjs/common';
 
 import { errorCode } from '../utils/graphql.js';
 import { waitForMail } from '../utils/mail-sink.js';
+import { addAxe, axeInput, logService } from '../utils/rack-operations.js';
 import { lookupIds, type Ids } from '../utils/meet-operations.js';
 import {
-  correctResult, meetResults, meetStandings, publishMeetResults, recordResult, resultAudit, resultsMeet, seasonStandings,
+  correctResult, importSheet, meetResults, meetStandings, publishMeetResults, recordResult, resultAudit, resultsMeet, seasonStandings,
   resultsActors, type ResultsActors,
 } from '../utils/results-operations.js';
 import { createTestApp } from '../utils/test-app.js';
@@ -48,6 +49,30 @@ describe('posting, ranking, correcting and publishing results (real MariaDB)', (
     const first = rows.find((r) => r.entryId === a)!;
     expect(first).toMatchObject({ rawTimes: [4000], timeHundredths: 4000, totalHundredths: 4200, grind: 'CONVEX', bevelIncludedDeg: 32, chiselWidthMm: 6.35, condition: 'SEASONED', speciesId: 'eastern-white-pine', diameterMm: 304.8 });
     expect(rows.find((r) => r.entryId === c)).toMatchObject({ rawTimes: [4199, 4201], timeHundredths: 4200 });
+  });
+
+  it("fills the head setup from the chosen rack axe and keeps it when the axe is reground", async () => {
+    const { meetId, athletes } = await resultsMeet(app, ids, tokens);
+    const [first, second, cfork] = [athletes[0]!, athletes[1]!, athletes[3]!];
+    const added = (await addAxe(app, tokens.coach, ids.clubs.LARCH, axeInput({ grind: 'CHISEL', bevelIncludedDeg: 15, chiselWidthMm: 19.05 }))).data!.addAxe;
+    const res = await recordResult(app, tokens.organiser, { entryId: first.entryId, status: 'FINISHED', times: ['40.00'], axeId: added.id, condition: 'DRY' });
+    expect(res.data!.recordResult.results[0]).toMatchObject({ axeLabel: added.label, grind: 'CHISEL', bevelIncludedDeg: 15, chiselWidthMm: 19.05 });
+
+    const regrind = await logService(app, tokens.coach, { axeId: added.id, kind: 'REGRIND', doneOn: new Date().toISOString().slice(0, 10), doneBy: 'Test grinder', setup: { bevelIncludedDeg: 17 } });
+    expect(regrind.errors).toBeUndefined();
+    // What was measured on the day wins over the rack; the earlier result keeps its snapshot.
+    const typed = await recordResult(app, tokens.organiser, { entryId: second.entryId, status: 'FINISHED', times: ['41.00'], axeId: added.id, chiselWidthMm: 12 });
+    const rows = typed.data!.recordResult.results;
+    expect(rows.find((r) => r.entryId === second.entryId)).toMatchObject({ grind: 'CHISEL', bevelIncludedDeg: 17, chiselWidthMm: 12 });
+    expect(rows.find((r) => r.entryId === first.entryId)).toMatchObject({ bevelIncludedDeg: 15, chiselWidthMm: 19.05 });
+    const other = await recordResult(app, tokens.organiser, { entryId: cfork.entryId, status: 'FINISHED', times: ['41.00'], axeId: added.id });
+    expect(other.errors?.[0]?.extensions).toMatchObject({ field: 'axeId' });
+
+    // A sheet naming the axe by its label links it too.
+    const sheet = `event,division,club,athletes,time,axe label\r\nUnderhand chop,Men's,LARCH,${athletes[2]!.name},42.00,${added.label.toLowerCase()}`;
+    expect((await importSheet(app, tokens.organiser, meetId, sheet)).body).toMatchObject({ imported: 1 });
+    const page = (await meetResults(app, meetId, tokens.organiser)).data!.meetResults.events[0]!.results;
+    expect(page.find((r) => r.entryId === athletes[2]!.entryId)).toMatchObject({ axeLabel: added.label, grind: 'CHISEL', bevelIncludedDeg: 17 });
   });
 
   it('refuses coaches and athletes who try to post a result', async () => {

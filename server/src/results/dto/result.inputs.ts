@@ -1,6 +1,7 @@
 import { Field, Float, ID, InputType, Int } from '@nestjs/graphql';
 
 import { DivisionEnum } from '../../league/models/league.enums.js';
+import { GrindEnum } from '../../rack/models/rack.enums.js';
 import { BlockConditionEnum, ResultSortDirectionEnum, ResultSortFieldEnum, ResultStatusEnum } from '../models/results.enums.js';
 
 @InputType()
@@ -32,8 +33,8 @@ export class RecordResultInput {
   @Field(() => String, { nullable: true })
   axeLabel?: string | null;
 
-  @Field(() => String, { nullable: true, description: 'FLAT, CONVEX, CHISEL or COMPOUND' })
-  grind?: string | null;
+  @Field(() => GrindEnum, { nullable: true })
+  grind?: GrindEnum | null;
 
   @Field(() => Float, { nullable: true, description: 'Included angle, degrees' })
   bevelIncludedDeg?: number | null;
@@ -61,7 +62,7 @@ export class ResultsFilter {
   @Field(() => String, { nullable: true }) speciesId?: string | null;
   @Field(() => Float, { nullable: true }) diameterMinMm?: number | null;
   @Field(() => Float, { nullable: true }) diameterMaxMm?: number | null;
-  @Field(() => String, { nullable: true }) grind?: string | null;
+  @Field(() => GrindEnum, { nullable: true }) grind?: GrindEnum | null;
   @Field(() => Float, { nullable: true }) bevelMinDeg?: number | null;
   @Field(() => Float, { nullable: true }) bevelMaxDeg?: number | null;
   @Field(() => BlockConditionEnum, { nullable: true }) condition?: BlockConditionEnum | null;

@@ -3,6 +3,7 @@ import { Field, Float, ID, Int, ObjectType } from '@nestjs/graphql';
 import { DivisionEnum } from '../../league/models/league.enums.js';
 import { EntryAthleteModel, EntryModel } from '../../meets/models/meet.model.js';
 import { MeetStatusEnum, ResultKindEnum } from '../../meets/models/meets.enums.js';
+import { GrindEnum } from '../../rack/models/rack.enums.js';
 import { BlockConditionEnum, ResultStatusEnum } from './results.enums.js';
 
 @ObjectType('Result', { description: 'One entry\'s result: what was posted and what it earned (computed, never typed)' })
@@ -40,7 +41,7 @@ export class ResultModel {
   @Field(() => Int, { nullable: true }) runOffRank: number | null;
   @Field(() => ID, { nullable: true }) axeId: string | null;
   @Field(() => String, { nullable: true }) axeLabel: string | null;
-  @Field(() => String, { nullable: true, description: 'FLAT, CONVEX, CHISEL or COMPOUND' }) grind: string | null;
+  @Field(() => GrindEnum, { nullable: true }) grind: GrindEnum | null;
   @Field(() => Float, { nullable: true }) bevelIncludedDeg: number | null;
   @Field(() => Float, { nullable: true }) chiselWidthMm: number | null;
   @Field(() => String, { nullable: true }) speciesId: string | null;

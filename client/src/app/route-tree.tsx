@@ -36,9 +36,13 @@ const RackPage = lazyPage(() => import('./routes/rack/rack-page.js'), 'RackPage'
 const AxePage = lazyPage(() => import('./routes/rack/axe-page.js'), 'AxePage');
 const GeometryPage = lazyPage(() => import('./routes/rack/geometry-page.js'), 'GeometryPage');
 const LineupPage = lazyPage(() => import('./routes/rack/lineup-page.js'), 'LineupPage');
+const TrialsListPage = lazyPage(() => import('./routes/trials/trials-list-page.js'), 'TrialsListPage');
+const TrialPage = lazyPage(() => import('./routes/trials/trial-page.js'), 'TrialPage');
+const NewTrialPage = lazyPage(() => import('./routes/trials/new-trial-page.js'), 'NewTrialPage');
+const RecordTrialPage = lazyPage(() => import('./routes/trials/record-trial-page.js'), 'RecordTrialPage');
 
 // Places still being built share one page; a built place joins this set and declares its own routes.
-const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack', 'fieldNotes', 'firstCuts']);
+const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack', 'trials', 'fieldNotes', 'firstCuts']);
 const placeRoutes: RouteObject[] = places.filter((place) => !builtPlaces.has(place.key)).map((place) => {
   const page = <ComingSoonPage placeKey={place.key} />;
   return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
@@ -91,6 +95,10 @@ export const routeTree: RouteObject[] = [
       { path: paths.rackAxe.path, element: <AxePage /> },
       { path: paths.rackGeometry.path, element: <GeometryPage /> },
       { path: paths.rackLineup.path, element: <RequireAuth><LineupPage /></RequireAuth> },
+      { path: paths.trials.path, element: <RequireAuth><TrialsListPage /></RequireAuth> },
+      { path: paths.newTrial.path, element: <RequireAuth roles={['COACH']}><NewTrialPage /></RequireAuth> },
+      { path: paths.trial.path, element: <RequireAuth><TrialPage /></RequireAuth> },
+      { path: paths.recordTrial.path, element: <RequireAuth roles={['COACH']}><RecordTrialPage /></RequireAuth> },
       { path: paths.fieldNotes.path, element: <FieldNotesPage /> },
       { path: paths.newFieldNote.path, element: <RequireAuth roles={['COACH']}><NewFieldNotePage /></RequireAuth> },
       { path: paths.myFieldNotes.path, element: <RequireAuth roles={['COACH']}><MyFieldNotesPage /></RequireAuth> },

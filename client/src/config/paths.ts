@@ -64,4 +64,9 @@ export const paths = {
   fieldNoteHistory: { path: '/field-notes/:slug/history', href: (slug: string) => `/field-notes/${encodeURIComponent(slug)}/history` },
   fieldNotesReview: place('/field-notes/review'),
   myFieldNotes: place('/field-notes/mine'),
+  /** The Trials place for one club (members of several clubs pick one). */
+  trialsOfClub: { path: '/trials', href: (clubId?: string) => withQuery('/trials', { club: clubId }) },
+  newTrial: { path: '/trials/new', href: (clubId: string) => withQuery('/trials/new', { club: clubId }) },
+  trial: { path: '/trials/:trialId', href: (trialId: string) => `/trials/${encodeURIComponent(trialId)}` },
+  recordTrial: { path: '/trials/:trialId/record', href: (trialId: string) => `/trials/${encodeURIComponent(trialId)}/record` },
 } as const;

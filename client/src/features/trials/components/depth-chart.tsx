@@ -1,5 +1,5 @@
 import Box from '@mui/material/Box';
-import { useTheme } from '@mui/material/styles';
+import { useColorScheme } from '@mui/material/styles';
 import Typography from '@mui/material/Typography';
 import { LineChart } from '@mui/x-charts/LineChart';
 
@@ -36,7 +36,9 @@ export function depthSeries(runs: TrialRun[], units: UnitPreference): { swings: 
 /** Depth per swing for each axe on the block. */
 export function DepthChart({ runs, units }: { runs: TrialRun[]; units: UnitPreference }) {
   const { swings, series } = depthSeries(runs, units);
-  const colours = LINE_COLOURS[useTheme().palette.mode];
+  const { mode, systemMode } = useColorScheme();
+  // The theme switches schemes with CSS variables, so the scheme in use comes from useColorScheme.
+  const colours = LINE_COLOURS[(mode === 'system' ? systemMode : mode) === 'dark' ? 'dark' : 'light'];
   const unit = units === 'IMPERIAL' ? 'in' : 'mm';
   if (swings.length === 0) return <Typography color="text.secondary">No counted swing yet, so there is nothing to draw.</Typography>;
   return (

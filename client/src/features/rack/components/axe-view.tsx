@@ -19,6 +19,7 @@ import type { UnitPreference } from '../api/types.js';
 import { AxeFormDialog } from './axe-form-dialog.js';
 import { AxePhotos } from './axe-photos.js';
 import { AxeSetup } from './axe-setup.js';
+import { AxeTrials } from './axe-trials.js';
 import { AxeStatusChip } from './axe-status-chip.js';
 import { RackCautions } from './rack-cautions.js';
 import { SectionCard } from '../../../components/ui/section-card.js';
@@ -84,7 +85,7 @@ export function AxeView({ axeId, units, today }: AxeViewProps) {
         <Typography sx={{ color: 'text.secondary' }}>Results posted with this axe will be listed here, each with the head setup it was chopped with.</Typography>
       </SectionCard>
       <SectionCard title="Trials run with it">
-        <Typography sx={{ color: 'text.secondary' }}>Trials that tested this axe on a block will be listed here.</Typography>
+        <AxeTrials axeId={axe.id} />
       </SectionCard>
       {dialog === 'edit' && (
         <AxeFormDialog clubId={axe.clubId} units={units} axe={axe} onClose={() => setDialog(null)} onSaved={() => { setDialog(null); setNotice(`${axe.label} saved.`); }} />

@@ -13,6 +13,7 @@ export function plainText(html: string): string {
 /** A published note as the search index holds it: text, tag words for plain questions, facets, evidence. */
 export function toKnowledgeDocument(article: ArticleEntity, revision: ArticleRevisionEntity): KnowledgeDocument {
   const { tags } = revision;
+  const keywords = articleKeywords(article.kind, tags);
   return {
     id: `${ARTICLE_DOCUMENT_PREFIX}${article.id}`,
     type: 'article',
@@ -21,7 +22,8 @@ export function toKnowledgeDocument(article: ArticleEntity, revision: ArticleRev
     title: revision.title,
     summary: revision.summary,
     text: plainText(revision.bodyHtml),
-    keywords: articleKeywords(article.kind, tags),
+    keywords,
+    findingKeywords: article.kind === 'FINDING' ? keywords : [],
     tags: [
       ...tags.species.map((s) => speciesName(s) ?? s),
       ...tags.grinds.map((g) => grindById(g)?.label ?? g),

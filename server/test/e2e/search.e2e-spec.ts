@@ -8,6 +8,7 @@ import request from 'supertest';
 
 import { SearchIndexer } from '../../src/search/search-indexer.service.js';
 import { commentStep, noteInput, noteStep, publishedNote, uniqueWord, updateNote } from '../utils/field-notes-operations.js';
+import { errorCode, gql } from '../utils/graphql.js';
 import { demoToken } from '../utils/meet-operations.js';
 import { createTestApp } from '../utils/test-app.js';
 
@@ -142,6 +143,9 @@ describe('search: a publish while the search service is down', () => {
       const note = await publishedNote(down, { coach, admin }, noteInput({ title: `Published in an outage ${marker}` }));
       expect(note.isPublished).toBe(true);
       await down.get(SearchIndexer).drain();
+      const status = await gql<{ searchIndexStatus: { healthy: boolean; lastError: string | null } }>(down, '{ searchIndexStatus { healthy pending failing lastError } }', {}, { token: admin });
+      expect(status.data?.searchIndexStatus.healthy).toBe(false);
+      expect(errorCode(await gql(down, '{ searchIndexStatus { pending } }', {}, { token: coach }))).toBe('FORBIDDEN');
       const master = new Meilisearch({ host: url!, apiKey: 'endgrain-dev-search-master-key' });
       let found = 0;
       for (let attempt = 0; attempt < 60 && found === 0; attempt += 1) {

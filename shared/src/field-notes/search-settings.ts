@@ -7,9 +7,10 @@ export const KNOWLEDGE_INDEX_UID = 'endgrain-knowledge';
 export const SEARCH_FACETS = ['kind', 'species', 'grind', 'event', 'condition'] as const;
 export type SearchFacet = (typeof SEARCH_FACETS)[number];
 
-// Earlier attributes weigh more: a title or tag word beats the same word deep in the text.
+// Earlier attributes weigh more: a title or tag word beats the same word deep in the text. A question
+// about wood and grind is best answered by evidence, so a finding's tag words come first of all.
 export const KNOWLEDGE_INDEX_SETTINGS = {
-  searchableAttributes: ['title', 'keywords', 'summary', 'tags', 'evidence', 'text'],
+  searchableAttributes: ['findingKeywords', 'title', 'keywords', 'summary', 'tags', 'evidence', 'text'],
   filterableAttributes: ['type', ...SEARCH_FACETS],
   sortableAttributes: ['publishedAt'],
   stopWords: [...QUESTION_STOP_WORDS],
@@ -29,6 +30,8 @@ export interface KnowledgeDocument {
   summary: string;
   text: string;
   keywords: string[];
+  /** The same words for a finding, empty for guides and safety notes (see the searchable order). */
+  findingKeywords: string[];
   tags: string[];
   evidence: string[];
   species: string[];

@@ -53,6 +53,7 @@ export function toPhotoModel(p: AxePhotoEntity, url: string): AxePhotoModel {
   return {
     id: p.id,
     url,
+    thumbnailUrl: `${url}${url.includes('?') ? '&' : '?'}size=thumb`,
     width: p.width,
     height: p.height,
     mimeType: p.mimeType,

@@ -1,6 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 
-import { addAxe, axe, axeInput, fetchPhoto, jpegLike, pngImage, removeAxePhoto, uploadPhoto, useRackApp } from '../utils/rack-operations.js';
+import { addAxe, axe, axeInput, fetchPhoto, pngImage, realJpegWithMetadata, removeAxePhoto, uploadPhoto, useRackApp } from '../utils/rack-operations.js';
 
 const LIMIT = 8 * 1024 * 1024; // the product's stated photo limit: 8 MiB
 
@@ -44,13 +44,25 @@ describe('axe photos over REST (real MariaDB, real upload folder)', () => {
 
   it('strips EXIF, XMP and the trailer from a JPEG', async () => {
     const a = await newAxe();
-    const res = await uploadPhoto(ctx.app, ctx.coach, a.id, jpegLike(800, 600));
+    const res = await uploadPhoto(ctx.app, ctx.coach, a.id, await realJpegWithMetadata(800, 600));
     expect(res.status).toBe(201);
     const served = await fetchPhoto(ctx.app, (res.body as { url: string }).url);
     const text = (served.body as Buffer).toString('latin1');
     expect(text).not.toContain('Hollowbrook Camera');
     expect(text).not.toContain('MOTION-TRAILER');
     expect(served.headers['content-type']).toBe('image/jpeg');
+  });
+
+  it('keeps a thumbnail at most 320 px wide, without the camera metadata', async () => {
+    const a = await newAxe();
+    const res = await uploadPhoto(ctx.app, ctx.coach, a.id, await realJpegWithMetadata(800, 600));
+    const thumb = await fetchPhoto(ctx.app, (res.body as { thumbnailUrl: string }).thumbnailUrl);
+    expect(thumb.headers['content-type']).toBe('image/webp');
+    const { default: sharp } = await import('sharp');
+    const meta = await sharp(thumb.body as Buffer).metadata();
+    expect([meta.width, meta.height]).toEqual([320, 240]);
+    expect(meta.exif).toBeUndefined();
+    expect((thumb.body as Buffer).toString('latin1')).not.toContain('Hollowbrook Camera');
   });
 
   it("keeps a private axe's photo from another club's coach and from visitors", async () => {

@@ -262,3 +262,13 @@ export function lineupOverrides(app: INestApplication, token: string, meetId: st
 export function clearLineupAssignment(app: INestApplication, token: string, entryId: string) {
   return gql<{ clearLineupAssignment: boolean }>(app, 'mutation($e: ID!) { clearLineupAssignment(entryId: $e) }', { e: entryId }, { token });
 }
+
+/** A decodable JPEG (drawn by sharp) carrying the same camera metadata and trailer as jpegLike. */
+export async function realJpegWithMetadata(width: number, height: number): Promise<Buffer> {
+  const { default: sharp } = await import('sharp');
+  const plain = await sharp({ create: { width, height, channels: 3, background: '#4a6b3a' } }).jpeg().toBuffer();
+  const fake = jpegLike(width, height);
+  // jpegLike's metadata segments sit between its SOI and its quantisation table (FF DB).
+  const metadata = fake.subarray(2, fake.indexOf(Buffer.from([0xff, 0xdb])));
+  return Buffer.concat([plain.subarray(0, 2), metadata, plain.subarray(2), Buffer.from('MOTION-TRAILER', 'latin1')]);
+}

@@ -25,6 +25,9 @@ export class AxePhotoModel {
   @Field(() => String, { description: 'Where to fetch the image; carries a short-lived signature for a private axe' })
   url: string;
 
+  @Field(() => String, { description: 'A copy at most 320 px wide, for lists' })
+  thumbnailUrl: string;
+
   @Field(() => Int)
   width: number;
 

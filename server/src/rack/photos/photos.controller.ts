@@ -36,9 +36,10 @@ export class PhotosController {
     @Param('photoId') photoId: string,
     @Query('exp') exp: string | undefined,
     @Query('sig') sig: string | undefined,
+    @Query('size') size: string | undefined,
     @Res() res: Response,
   ): Promise<void> {
-    const file = await this.photos.file(actor, photoId, exp, sig);
+    const file = await this.photos.file(actor, photoId, exp, sig, size);
     res.setHeader('content-type', file.mimeType);
     res.setHeader('cache-control', `${file.isPublic ? 'public' : 'private'}, max-age=3600`);
     res.setHeader('content-disposition', 'inline');

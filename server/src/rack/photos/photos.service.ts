@@ -3,6 +3,7 @@ import { mkdir, rename, rm, writeFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 
 import { Inject, Injectable } from '@nestjs/common';
+import sharp from 'sharp';
 import { canReachClub } from '@endgrain/shared';
 
 import type { AuthUser } from '../../common/auth/auth-user.js';
@@ -20,6 +21,8 @@ import { PHOTO_FIELD } from './photo-upload.interceptor.js';
 import { PhotoUrlSigner } from './photo-url-signer.js';
 
 export const PHOTOS_PER_AXE = 12;
+export const THUMBNAIL_WIDTH = 320;
+const thumbName = (fileName: string): string => fileName.replace(/\.[a-z]+$/, '.thumb.webp');
 const EXTENSION: Record<PhotoMimeValue, string> = { 'image/jpeg': 'jpg', 'image/png': 'png', 'image/webp': 'webp' };
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/;
 
@@ -63,10 +66,12 @@ export class PhotosService {
     // Written under a temporary name and renamed, so a reader never sees half a file.
     await writeFile(join(this.folder, `${fileName}.part`), image.bytes);
     await rename(join(this.folder, `${fileName}.part`), join(this.folder, fileName));
+    await this.writeThumbnail(image.bytes, fileName);
     try {
       await this.repo.photos().insert({ id, axeId, fileName, mimeType: image.mimeType, byteSize: image.bytes.length, width: image.width, height: image.height, caption, uploadedBy: actor.id });
     } catch (error) {
       await rm(join(this.folder, fileName), { force: true });
+      await rm(join(this.folder, thumbName(fileName)), { force: true });
       throw error;
     }
     const row = await this.repo.photos().findOneByOrFail({ id });
@@ -74,11 +79,13 @@ export class PhotosService {
   }
 
   /** The file behind a photo link, for whoever may see the axe or holds a valid signed link. */
-  async file(actor: AuthUser | null, photoId: string, exp?: string, sig?: string): Promise<PhotoFile> {
+  async file(actor: AuthUser | null, photoId: string, exp?: string, sig?: string, size?: string): Promise<PhotoFile> {
     const photo = UUID.test(photoId) ? await this.repo.findPhoto(photoId) : null;
     const allowed = photo && (Boolean(photo.axe.isPublic) || canReachClub(actor, photo.axe.clubId) || this.signer.verify(photo.id, exp, sig));
     if (!photo || !allowed) throw DomainError.notFound('That photo');
-    return { path: join(this.folder, photo.fileName), mimeType: photo.mimeType, isPublic: Boolean(photo.axe.isPublic) };
+    const isPublic = Boolean(photo.axe.isPublic);
+    if (size === 'thumb') return { path: join(this.folder, thumbName(photo.fileName)), mimeType: 'image/webp', isPublic };
+    return { path: join(this.folder, photo.fileName), mimeType: photo.mimeType, isPublic };
   }
 
   async remove(actor: AuthUser, photoId: string): Promise<boolean> {
@@ -87,6 +94,20 @@ export class PhotosService {
     assertCanEditAxe(actor, photo.axe);
     await this.repo.photos().delete({ id: photoId });
     await rm(join(this.folder, photo.fileName), { force: true });
+    await rm(join(this.folder, thumbName(photo.fileName)), { force: true });
     return true;
+  }
+
+  /** A small WebP for lists: turned upright by the orientation tag, no metadata, never enlarged. */
+  private async writeThumbnail(bytes: Buffer, fileName: string): Promise<void> {
+    let thumb: Buffer;
+    try {
+      thumb = await sharp(bytes).rotate().resize({ width: THUMBNAIL_WIDTH, withoutEnlargement: true }).webp({ quality: 80 }).toBuffer();
+    } catch {
+      await rm(join(this.folder, fileName), { force: true });
+      throw DomainError.badInput(PHOTO_FIELD, 'That file could not be read as a picture; export it again as JPEG, PNG or WebP.');
+    }
+    await writeFile(join(this.folder, `${thumbName(fileName)}.part`), thumb);
+    await rename(join(this.folder, `${thumbName(fileName)}.part`), join(this.folder, thumbName(fileName)));
   }
 }

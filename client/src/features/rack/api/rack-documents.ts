@@ -54,6 +54,7 @@ const DETAIL_FIELDS = gql`
     photos {
       id
       url
+      thumbnailUrl
       width
       height
       mimeType

@@ -41,6 +41,7 @@ export interface Axe {
 export interface AxePhoto {
   id: string;
   url: string;
+  thumbnailUrl: string;
   width: number;
   height: number;
   mimeType: string;

@@ -13,7 +13,7 @@ import { rackDocuments } from '../api/rack-documents.js';
 import type { AxePhoto } from '../api/types.js';
 import { PHOTO_TYPES, uploadPhoto } from '../api/upload-photo.js';
 
-// No resizer runs on the server, so the originals are shown at a fixed width (the browser scales them).
+// The server keeps a copy at most 320 px wide for lists; the link opens the full photo.
 const THUMB_WIDTH = 160;
 
 export interface AxePhotosProps {
@@ -51,7 +51,7 @@ export function AxePhotos({ axeId, label, photos, canManage }: AxePhotosProps) {
             <Box component="li" key={photo.id} sx={{ width: THUMB_WIDTH }}>
               <a href={photo.url} target="_blank" rel="noreferrer">
                 <img
-                  src={photo.url}
+                  src={photo.thumbnailUrl}
                   width={THUMB_WIDTH}
                   height={Math.round((THUMB_WIDTH * photo.height) / photo.width)}
                   alt={photo.caption || `Photo of ${label}`}

@@ -6,6 +6,7 @@ import { SEND_BACK_COMMENT_MIN } from '@endgrain/shared';
 import { useState } from 'react';
 import { Link as RouterLink, useNavigate } from 'react-router';
 
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.js';
 import { paths } from '../../../config/paths.js';
 import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
 import { fieldNotesDocuments as docs } from '../api/field-notes-documents.js';
@@ -102,10 +103,10 @@ export function NoteActions({ note, onChanged }: { note: FieldNote; onChanged: (
         onConfirm={async (comment) => { await unpublish({ variables: { ...variables, comment } }); await after(); }}>
         It leaves the public pages and search at once. Its revisions are kept, and it can be published again after review.
       </CommentDialog>
-      <CommentDialog open={open === 'delete'} title="Delete this draft?" confirmLabel="Delete" destructive onClose={() => setOpen(null)}
+      <ConfirmDialog open={open === 'delete'} title="Delete this draft?" confirmLabel="Delete" destructive onClose={() => setOpen(null)}
         onConfirm={async () => { await remove({ variables }); setOpen(null); await navigate(paths.myFieldNotes.href()); }}>
         The draft and all its revisions are deleted. This cannot be undone.
-      </CommentDialog>
+      </ConfirmDialog>
     </Stack>
   );
 }

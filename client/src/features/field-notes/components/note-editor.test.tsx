@@ -4,7 +4,6 @@ import { GraphQLError } from 'graphql';
 
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { fieldNotesDocuments } from '../api/field-notes-documents.js';
-import { withQueryClient } from '../testing/with-query-client.js';
 import { NoteEditor } from './note-editor.js';
 
 const input = {
@@ -19,7 +18,7 @@ const input = {
 
 describe('NoteEditor', () => {
   it('says what is missing before anything is sent', async () => {
-    const { user } = renderWithProviders({ element: withQueryClient(<NoteEditor onSaved={jest.fn()} />) });
+    const { user } = renderWithProviders({ element: <NoteEditor onSaved={jest.fn()} /> });
     await user.type(screen.getByLabelText('Title'), 'Axe');
     await user.click(screen.getByRole('button', { name: 'Save draft' }));
     expect(await screen.findByText('A title needs at least 5 characters.')).toBeInTheDocument();
@@ -30,7 +29,7 @@ describe('NoteEditor', () => {
     const refusal = new GraphQLError('"ironwood" is not a species Endgrain knows.', { extensions: { code: 'BAD_USER_INPUT', field: 'tags.species' } });
     const onSaved = jest.fn();
     const { user } = renderWithProviders({
-      element: withQueryClient(<NoteEditor onSaved={onSaved} />),
+      element: <NoteEditor onSaved={onSaved} />,
       mocks: [{ request: { query: fieldNotesDocuments.createFieldNote, variables: { input } }, result: { errors: [refusal] } }],
     });
     await user.type(screen.getByLabelText('Title'), input.title);
@@ -43,7 +42,7 @@ describe('NoteEditor', () => {
   });
 
   it('previews the text with the same strict renderer the server uses', async () => {
-    const { user } = renderWithProviders({ element: withQueryClient(<NoteEditor onSaved={jest.fn()} />) });
+    const { user } = renderWithProviders({ element: <NoteEditor onSaved={jest.fn()} /> });
     await user.type(screen.getByLabelText('Note text (markdown)'), '# Boots{enter}{enter}<b>no</b>');
     await user.click(screen.getByRole('tab', { name: 'Preview' }));
     expect(screen.getByRole('heading', { level: 2, name: 'Boots' })).toBeInTheDocument();

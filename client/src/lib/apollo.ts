@@ -29,8 +29,12 @@ export function createApolloClient(options: ApolloClientOptions = {}): ApolloCli
   return new ApolloClient({
     link: ApolloLink.from([signOutOnRejectedToken, authLink, transport]),
     cache: new InMemoryCache({
-      // A membership has no id of its own; it belongs inside its user.
-      typePolicies: { ClubMembership: { keyFields: false } },
+      typePolicies: {
+        // A membership has no id of its own; it belongs inside its user.
+        ClubMembership: { keyFields: false },
+        // A note's working copy and its published text share an id: keep them apart.
+        FieldNote: { keyFields: ['id', 'isDraftView'] },
+      },
     }),
   });
 }

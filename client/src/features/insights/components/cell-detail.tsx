@@ -6,7 +6,9 @@ import Dialog from '@mui/material/Dialog';
 import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogTitle from '@mui/material/DialogTitle';
+import type { Theme } from '@mui/material/styles';
 import Typography from '@mui/material/Typography';
+import useMediaQuery from '@mui/material/useMediaQuery';
 import { DataGrid, type GridColDef } from '@mui/x-data-grid';
 
 import { PageLoading } from '../../../components/ui/page-loading.js';
@@ -28,14 +30,15 @@ export interface CellDetailProps {
 export function CellDetail({ filter, speciesId, speciesName, grind, imperial, onClose }: CellDetailProps) {
   const { data, loading, error } = useQuery(grainMapDocuments.cell, { variables: { filter, species: speciesId, grind } });
   const length = (mm: number) => formatLength(mm, imperial ? 'imperial' : 'metric', { digits: imperial ? 1 : 0 });
+  // On a phone the athlete, the time and the ratio come first so they fit without scrolling sideways.
   const resultColumns: GridColDef<GrainRow>[] = [
-    { field: 'meetDate', headerName: 'Date', width: 110 },
-    { field: 'athleteName', headerName: 'Athlete', flex: 1, minWidth: 140 },
-    { field: 'meetName', headerName: 'Meet', flex: 1, minWidth: 130 },
-    { field: 'diameterMm', headerName: 'Block', width: 90, valueFormatter: (v: number) => length(v) },
-    { field: 'hundredths', headerName: 'Time', width: 90, valueFormatter: (v: number) => formatTime(v) },
+    { field: 'athleteName', headerName: 'Athlete', flex: 1, minWidth: 130 },
+    { field: 'hundredths', headerName: 'Time', width: 80, valueFormatter: (v: number) => formatTime(v) },
+    { field: 'ratio', headerName: 'vs own usual', width: 110, valueFormatter: (v: number | null) => (v === null ? 'only result' : v.toFixed(3)) },
     { field: 'normalisedHundredths', headerName: 'On reference block', width: 140, valueFormatter: (v: number) => formatTime(Math.round(v)) },
-    { field: 'ratio', headerName: 'vs own usual', width: 120, valueFormatter: (v: number | null) => (v === null ? 'only result' : v.toFixed(3)) },
+    { field: 'diameterMm', headerName: 'Block', width: 90, valueFormatter: (v: number) => length(v) },
+    { field: 'meetDate', headerName: 'Date', width: 110 },
+    { field: 'meetName', headerName: 'Meet', flex: 1, minWidth: 130 },
     { field: 'includedDeg', headerName: 'Bevel', width: 80, valueFormatter: (v: number | null) => (v === null ? '—' : `${v}°`) },
   ];
   const trialColumns: GridColDef<GrainTrialRow>[] = [
@@ -45,10 +48,11 @@ export function CellDetail({ filter, speciesId, speciesName, grind, imperial, on
     { field: 'axeLabel', headerName: 'Axe', flex: 1 },
     { field: 'ratioToReference', headerName: 'Depth vs reference', width: 150, valueFormatter: (v: number) => v.toFixed(2) },
   ];
+  const phone = useMediaQuery((theme: Theme) => theme.breakpoints.down('sm'));
   const detail = data?.grainCell;
   const cell = detail?.cells[0];
   return (
-    <Dialog open onClose={onClose} fullWidth maxWidth="lg" aria-labelledby="grain-cell-title">
+    <Dialog open onClose={onClose} fullWidth fullScreen={phone} maxWidth="lg" aria-labelledby="grain-cell-title">
       <DialogTitle id="grain-cell-title">{speciesName}, {grind} grind</DialogTitle>
       <DialogContent>
         {loading && <PageLoading />}
@@ -79,7 +83,7 @@ export function CellDetail({ filter, speciesId, speciesName, grind, imperial, on
         )}
       </DialogContent>
       <DialogActions>
-        <Button onClick={onClose}>Close</Button>
+        <Button onClick={onClose} size="large" sx={{ minHeight: 44 }}>Close</Button>
       </DialogActions>
     </Dialog>
   );

@@ -15,10 +15,12 @@ export interface GrainFiltersProps {
   filter: GrainUrlFilter;
   onChange: (change: Partial<GrainUrlFilter>) => void;
   options: GrainOptions;
+  /** The woods in the current map, for the species choice. */
+  species?: { speciesId: string; name: string }[];
 }
 
 /** Event, division, seasons, clubs, condition, diameter range, angle band and chisel band. */
-export function GrainFilters({ filter, onChange, options }: GrainFiltersProps) {
+export function GrainFilters({ filter, onChange, options, species = [] }: GrainFiltersProps) {
   const events = options.eventTypes.filter((e) => e.resultKind === 'TIMED' && e.teamSize === 1);
   return (
     <Box sx={{ display: 'grid', gap: 1.5, gridTemplateColumns: { xs: 'repeat(2, minmax(0, 1fr))', md: 'repeat(5, minmax(0, 1fr))' } }} role="group" aria-label="Grain Map filters">
@@ -34,6 +36,10 @@ export function GrainFilters({ filter, onChange, options }: GrainFiltersProps) {
       </TextField>
       <TextField select label="Clubs" value={filter.clubs} onChange={(e) => onChange({ clubs: e.target.value as unknown as string[] })} slotProps={multi}>
         {options.clubs.map((c) => <MenuItem key={c.id} value={c.id}>{c.name}</MenuItem>)}
+      </TextField>
+      <TextField select label="Species" value={species.some((s) => s.speciesId === filter.species) ? filter.species : ''} onChange={(e) => onChange({ species: e.target.value, cell: '' })} slotProps={slots}>
+        <MenuItem value="">All species</MenuItem>
+        {species.map((s) => <MenuItem key={s.speciesId} value={s.speciesId}>{s.name}</MenuItem>)}
       </TextField>
       <TextField select label="Block condition" value={filter.condition} onChange={(e) => onChange({ condition: e.target.value })} slotProps={slots}>
         <MenuItem value="">Any condition</MenuItem>

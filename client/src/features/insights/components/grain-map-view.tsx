@@ -20,7 +20,9 @@ export function GrainMapView({ options, imperial }: { options: GrainOptions; imp
   const fallback = options.eventTypes.find((e) => e.code === 'underhand-chop')?.id ?? options.eventTypes[0]?.id ?? '';
   const { filter, setFilter, variables } = useGrainFilter(fallback);
   const { data, loading, error } = useQuery(grainMapDocuments.map, { variables: { filter: variables }, skip: !variables.eventTypeId });
-  const map = data?.grainMap;
+  const whole = data?.grainMap;
+  const one = whole?.species.filter((s) => s.speciesId === filter.species) ?? [];
+  const map = whole && one.length > 0 ? { ...whole, species: one } : whole;
   const [openSpecies, openGrind] = filter.cell.split('~');
   const download = async () => {
     const token = authToken.get();
@@ -32,7 +34,7 @@ export function GrainMapView({ options, imperial }: { options: GrainOptions; imp
   };
   return (
     <Stack spacing={3}>
-      <GrainFilters filter={filter} onChange={setFilter} options={options} />
+      <GrainFilters filter={filter} onChange={setFilter} options={options} species={whole?.species ?? []} />
       {loading && <PageLoading />}
       {error && <Alert severity="error">Could not compute the map: {error.message}</Alert>}
       {map && map.cells.length === 0 && (

@@ -13,12 +13,14 @@ export interface GrainUrlFilter {
   dmax: string;
   angle: string;
   chisel: string;
+  /** Only this wood's row is shown; the numbers stay those of the whole map, since an athlete's usual time spans every wood. */
+  species: string;
   /** The open cell, "species~grind". */
   cell: string;
 }
 
 const LISTS = ['seasons', 'clubs'] as const;
-const TEXTS = ['event', 'division', 'condition', 'dmin', 'dmax', 'angle', 'chisel', 'cell'] as const;
+const TEXTS = ['event', 'division', 'condition', 'dmin', 'dmax', 'angle', 'chisel', 'species', 'cell'] as const;
 
 /** The Grain Map's filters and open cell live in the address, so a view can be shared and bookmarked. */
 export function useGrainFilter(defaultEventId: string) {
@@ -36,6 +38,7 @@ export function useGrainFilter(defaultEventId: string) {
       dmax: text('dmax'),
       angle: text('angle'),
       chisel: text('chisel'),
+      species: text('species'),
       cell: text('cell'),
     };
   }, [params, defaultEventId]);

@@ -52,6 +52,7 @@ export class AxeServicesService {
       });
       if (changes.length > 0) await this.repo.axes(m).update({ id: axe.id }, after);
     });
+    if (changes.length > 0) await this.axes.reindex(axe.id);
     return this.axes.detail(actor, axe.id, now);
   }
 }

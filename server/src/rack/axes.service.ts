@@ -5,6 +5,9 @@ import { canManageClub, canReachClub } from '@endgrain/shared';
 
 import type { AuthUser } from '../common/auth/auth-user.js';
 import { DomainError } from '../common/errors/domain-error.js';
+import { SearchIndexer } from '../search/search-indexer.service.js';
+import { SearchOutboxRepository } from '../search/search-outbox.repository.js';
+import { AXE_SEARCH_TYPE } from './axe-search-source.js';
 import { axeValues, setupChanges, type AxeSetup } from './axe-values.js';
 import type { AxeInput, RackFilter } from './dto/axe.input.js';
 import { AxeServiceEntity } from './entities/axe-service.entity.js';
@@ -20,7 +23,15 @@ export class AxesService {
   constructor(
     @Inject(RackRepository) private readonly repo: RackRepository,
     @Inject(PhotoUrlSigner) private readonly signer: PhotoUrlSigner,
+    @Inject(SearchOutboxRepository) private readonly outbox: SearchOutboxRepository,
+    @Inject(SearchIndexer) private readonly indexer: SearchIndexer,
   ) {}
+
+  /** Queues the axe for the search index (added, removed or changed when it is public or goes private). */
+  async reindex(id: string): Promise<void> {
+    await this.outbox.enqueue(null, AXE_SEARCH_TYPE, [id]);
+    this.indexer.kick();
+  }
 
   async rack(actor: AuthUser | null, clubId: string, filter: RackFilter = {}): Promise<RackModel> {
     const club = await this.repo.findClub(clubId);
@@ -55,6 +66,7 @@ export class AxesService {
     await this.assertLabelFree(clubId, values.label);
     const id = randomUUID();
     await this.repo.axes().insert({ id, clubId, ...values, createdBy: actor.id });
+    await this.reindex(id);
     return this.detail(actor, id);
   }
 
@@ -80,6 +92,7 @@ export class AxesService {
         changes,
       } satisfies Partial<AxeServiceEntity>);
     });
+    await this.reindex(id);
     return this.detail(actor, id, now);
   }
 

@@ -1,5 +1,7 @@
-import { Module } from '@nestjs/common';
+import { Inject, Module, type OnModuleInit } from '@nestjs/common';
 
+import { SearchIndexer } from '../search/search-indexer.service.js';
+import { AxeSearchSource } from './axe-search-source.js';
 import { AxeServicesService } from './axe-services.service.js';
 import { AxesService } from './axes.service.js';
 import { LineupsResolver } from './lineups/lineups.resolver.js';
@@ -16,4 +18,14 @@ import { RackResolver } from './rack.resolver.js';
   providers: [RackRepository, PhotoUrlSigner, AxesService, AxeServicesService, PhotosService, LineupsService, RackResolver, LineupsResolver],
   exports: [LineupsService],
 })
-export class RackModule {}
+export class RackModule implements OnModuleInit {
+  constructor(
+    @Inject(SearchIndexer) private readonly indexer: SearchIndexer,
+    @Inject(RackRepository) private readonly repo: RackRepository,
+  ) {}
+
+  /** Public axes are searchable beside Field Notes. */
+  onModuleInit(): void {
+    this.indexer.register(new AxeSearchSource(this.repo));
+  }
+}

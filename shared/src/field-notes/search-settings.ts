@@ -23,7 +23,7 @@ export const HIGHLIGHT_POST = '\uE001';
 /** One search document: what the index holds for a published note. */
 export interface KnowledgeDocument {
   id: string;
-  type: 'article';
+  type: 'article' | 'axe';
   kind: string;
   slug: string;
   title: string;

@@ -1,6 +1,6 @@
 import { conditionById, eventName, grindById, speciesName, type SearchFacet } from '@endgrain/shared';
 
-const KINDS: Record<string, string> = { FINDING: 'Finding', GUIDE: 'Guide', SAFETY_NOTE: 'Safety note' };
+const KINDS: Record<string, string> = { FINDING: 'Finding', GUIDE: 'Guide', SAFETY_NOTE: 'Safety note', AXE: 'Rack axe' };
 
 export const FACET_TITLES: Record<SearchFacet, string> = { kind: 'Kind', species: 'Species', grind: 'Grind', event: 'Event', condition: 'Block condition' };
 

@@ -40,6 +40,7 @@ const TrialsListPage = lazyPage(() => import('./routes/trials/trials-list-page.j
 const TrialPage = lazyPage(() => import('./routes/trials/trial-page.js'), 'TrialPage');
 const NewTrialPage = lazyPage(() => import('./routes/trials/new-trial-page.js'), 'NewTrialPage');
 const RecordTrialPage = lazyPage(() => import('./routes/trials/record-trial-page.js'), 'RecordTrialPage');
+const HandicapPage = lazyPage(() => import('./routes/handicap/handicap-page.js'), 'HandicapPage');
 
 // Places still being built share one page; a built place joins this set and declares its own routes.
 const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack', 'trials', 'fieldNotes', 'firstCuts']);
@@ -99,6 +100,7 @@ export const routeTree: RouteObject[] = [
       { path: paths.newTrial.path, element: <RequireAuth roles={['COACH']}><NewTrialPage /></RequireAuth> },
       { path: paths.trial.path, element: <RequireAuth><TrialPage /></RequireAuth> },
       { path: paths.recordTrial.path, element: <RequireAuth roles={['COACH']}><RecordTrialPage /></RequireAuth> },
+      { path: paths.handicapMarks.path, element: <RequireAuth roles={['ORGANISER']}><HandicapPage /></RequireAuth> },
       { path: paths.fieldNotes.path, element: <FieldNotesPage /> },
       { path: paths.newFieldNote.path, element: <RequireAuth roles={['COACH']}><NewFieldNotePage /></RequireAuth> },
       { path: paths.myFieldNotes.path, element: <RequireAuth roles={['COACH']}><MyFieldNotesPage /></RequireAuth> },

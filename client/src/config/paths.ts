@@ -69,4 +69,8 @@ export const paths = {
   newTrial: { path: '/trials/new', href: (clubId: string) => withQuery('/trials/new', { club: clubId }) },
   trial: { path: '/trials/:trialId', href: (trialId: string) => `/trials/${encodeURIComponent(trialId)}` },
   recordTrial: { path: '/trials/:trialId/record', href: (trialId: string) => `/trials/${encodeURIComponent(trialId)}/record` },
+  handicapMarks: {
+    path: '/meets/:meetId/handicap/:meetEventId',
+    href: (meetId: string, meetEventId: string) => `/meets/${encodeURIComponent(meetId)}/handicap/${encodeURIComponent(meetEventId)}`,
+  },
 } as const;

@@ -2,6 +2,7 @@ import { formatLength, formatTime } from '@endgrain/shared';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Chip from '@mui/material/Chip';
+import GlobalStyles from '@mui/material/GlobalStyles';
 import Stack from '@mui/material/Stack';
 import Table from '@mui/material/Table';
 import TableBody from '@mui/material/TableBody';
@@ -17,8 +18,23 @@ import type { HandicapMark, HandicapMarkInput, HandicapSheet } from '../api/hand
 
 const FLAG_WORDS: Record<string, string> = { 'thin-history': 'Thin history: check by hand', 'no-history': 'No history: set a mark by judgement' };
 
-// On paper the sheet keeps the marks and the cautions; the edit fields and buttons are left off.
-const PRINT = { '@media print': { '& .handicap-screen-only': { display: 'none' }, '& .handicap-print-only': { display: 'block' }, '& table': { fontSize: '10pt' } } };
+// On paper the sheet keeps the marks and the cautions; the app's bars, edit fields and buttons are left off.
+const PRINT = {
+  '@media print': {
+    '.MuiAppBar-root, nav, .handicap-screen-only': { display: 'none !important' },
+    '.handicap-print-only': { display: 'block !important' },
+    'table': { fontSize: '10pt' },
+  },
+};
+
+// On a phone each athlete's row becomes a small stacked card, so nothing is squeezed into slivers.
+const STACKED = {
+  '& thead': { display: { xs: 'none', md: 'table-header-group' } },
+  '& tr': { display: { xs: 'grid', md: 'table-row' }, gap: 0.5, py: { xs: 1.5, md: 0 }, borderBottom: { xs: 1, md: 0 }, borderColor: 'divider' },
+  '& td, & tbody th': { display: { xs: 'block', md: 'table-cell' }, '@media (max-width: 899.95px)': { border: 0, textAlign: 'left', py: 0 } },
+  '@media print': { '& thead': { display: 'table-header-group' }, '& tr': { display: 'table-row' }, '& td, & tbody th': { display: 'table-cell', borderBottom: '1px solid #999' } },
+};
+const phoneOnly = { display: { xs: 'inline', md: 'none' } };
 
 export interface HandicapSheetViewProps {
   sheet: HandicapSheet;
@@ -35,10 +51,11 @@ export function HandicapSheetView({ sheet, imperial, saving, onSave }: HandicapS
   const save = () => onSave(sheet.marks.map((m) => ({ athleteId: m.athleteId, markSeconds: typed[m.athleteId]?.trim() ? Number(typed[m.athleteId]) : null, note: m.overrideNote || null })));
   const block = formatLength(sheet.blockDiameterMm, imperial ? 'imperial' : 'metric', { digits: imperial ? 1 : 0 });
   return (
-    <Stack spacing={2} sx={PRINT}>
+    <Stack spacing={2}>
+      <GlobalStyles styles={PRINT} />
       <Typography>{sheet.eventName}, {sheet.division.toLowerCase()} · block {block} · {sheet.convention}</Typography>
       <Typography variant="body2" color="text.secondary">{sheet.note}</Typography>
-      <Box sx={{ overflowX: 'auto' }}>
+      <Box sx={STACKED}>
         <Table size="small" aria-label="Handicap marks">
           <TableHead>
             <TableRow>
@@ -85,7 +102,7 @@ function MarkRow({ mark, imperial, value, error, onChange }: MarkRowProps) {
         {mark.athleteName}
         {mark.flags.map((f) => <Chip key={f} size="small" color="warning" variant="outlined" label={FLAG_WORDS[f] ?? f} sx={{ ml: 1 }} />)}
       </TableCell>
-      <TableCell>{mark.expectedHundredths === null ? 'no past times' : formatTime(Math.round(mark.expectedHundredths))}</TableCell>
+      <TableCell><Box component="span" sx={phoneOnly}>Expected time </Box>{mark.expectedHundredths === null ? 'no past times' : formatTime(Math.round(mark.expectedHundredths))}</TableCell>
       <TableCell>
         <Typography variant="body2">{mark.n} past {mark.n === 1 ? 'time' : 'times'}</Typography>
         {mark.used.map((u) => (
@@ -94,7 +111,7 @@ function MarkRow({ mark, imperial, value, error, onChange }: MarkRowProps) {
           </Typography>
         ))}
       </TableCell>
-      <TableCell align="right">{mark.suggestedSeconds ?? '—'}</TableCell>
+      <TableCell align="right"><Box component="span" sx={phoneOnly}>Suggested mark (s) </Box>{mark.suggestedSeconds ?? '—'}</TableCell>
       <TableCell align="right">
         <TextField
           className="handicap-screen-only"
@@ -106,7 +123,7 @@ function MarkRow({ mark, imperial, value, error, onChange }: MarkRowProps) {
           error={error}
           helperText={error ? 'Whole seconds, 0–999' : value ? 'your mark' : 'blank keeps the suggestion'}
           slotProps={{ htmlInput: { inputMode: 'numeric', style: { minHeight: 28 } } }}
-          sx={{ width: 150 }}
+          sx={{ width: { xs: '100%', md: 170 } }}
         />
         <Box className="handicap-print-only" sx={{ display: 'none' }}>{value.trim() || (mark.markSeconds ?? '—')}</Box>
       </TableCell>

@@ -41,9 +41,14 @@ const TrialPage = lazyPage(() => import('./routes/trials/trial-page.js'), 'Trial
 const NewTrialPage = lazyPage(() => import('./routes/trials/new-trial-page.js'), 'NewTrialPage');
 const RecordTrialPage = lazyPage(() => import('./routes/trials/record-trial-page.js'), 'RecordTrialPage');
 const HandicapPage = lazyPage(() => import('./routes/handicap/handicap-page.js'), 'HandicapPage');
+const ResultsExplorerPage = lazyPage(() => import('./routes/results/results-explorer-page.js'), 'ResultsExplorerPage');
+const RecordsPage = lazyPage(() => import('./routes/results/records-page.js'), 'RecordsPage');
+const MeetResultsPage = lazyPage(() => import('./routes/results/meet-results-page.js'), 'MeetResultsPage');
+const PostResultsPage = lazyPage(() => import('./routes/results/post-results-page.js'), 'PostResultsPage');
+const SeasonStandingsPage = lazyPage(() => import('./routes/standings/season-standings-page.js'), 'SeasonStandingsPage');
 
 // Places still being built share one page; a built place joins this set and declares its own routes.
-const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack', 'trials', 'fieldNotes', 'firstCuts']);
+const builtPlaces = new Set<string>(['meets', 'grainMap', 'rack', 'trials', 'fieldNotes', 'firstCuts', 'results', 'standings']);
 const placeRoutes: RouteObject[] = places.filter((place) => !builtPlaces.has(place.key)).map((place) => {
   const page = <ComingSoonPage placeKey={place.key} />;
   return { path: place.href, element: place.membersOnly ? <RequireAuth>{page}</RequireAuth> : page };
@@ -109,6 +114,11 @@ export const routeTree: RouteObject[] = [
       { path: paths.editFieldNote.path, element: <RequireAuth roles={['COACH']}><EditFieldNotePage /></RequireAuth> },
       { path: paths.fieldNoteHistory.path, element: <RequireAuth><FieldNoteHistoryPage /></RequireAuth> },
       { path: paths.firstCuts.path, element: <FirstCutsPage /> },
+      { path: paths.results.path, element: <ResultsExplorerPage /> },
+      { path: paths.records.path, element: <RecordsPage /> },
+      { path: paths.meetResults.path, element: <MeetResultsPage /> },
+      { path: paths.postResults.path, element: <RequireAuth roles={['ORGANISER']}><PostResultsPage /></RequireAuth> },
+      { path: paths.seasonStandings.path, element: <SeasonStandingsPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -73,4 +73,15 @@ export const paths = {
     path: '/meets/:meetId/handicap/:meetEventId',
     href: (meetId: string, meetEventId: string) => `/meets/${encodeURIComponent(meetId)}/handicap/${encodeURIComponent(meetEventId)}`,
   },
+  /** The link in the publish e-mail (the server writes `/results/meets/:meetId`). */
+  meetResults: { path: '/results/meets/:meetId', href: (meetId: string) => `/results/meets/${encodeURIComponent(meetId)}` },
+  postResults: {
+    path: '/results/meets/:meetId/post',
+    href: (meetId: string, meetEventId?: string) => withQuery(`/results/meets/${encodeURIComponent(meetId)}/post`, { event: meetEventId }),
+  },
+  records: place('/results/records'),
+  seasonStandings: {
+    path: '/standings',
+    href: (seasonId?: string, division?: string) => withQuery('/standings', { season: seasonId, division: division?.toLowerCase() }),
+  },
 } as const;

@@ -1,4 +1,5 @@
 import type { RouteObject } from 'react-router';
+
 import { paths } from '../config/paths.js';
 import { places } from '../config/places.js';
 import { RequireAuth } from '../features/auth/components/require-auth.js';

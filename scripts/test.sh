@@ -52,6 +52,7 @@ suite() {
 JEST="node --experimental-vm-modules $ROOT/node_modules/jest/bin/jest.js"
 
 check typecheck npm run -s typecheck
+check lint npm run -s lint
 check graphql-schema-is-current bash scripts/check-schema.sh
 suite shared shared $JEST
 suite search-fake search-fake $JEST --runInBand

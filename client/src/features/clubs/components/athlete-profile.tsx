@@ -3,7 +3,6 @@ import { DIVISION_LABELS, EXPERIENCE_LABELS } from '@endgrain/shared';
 import Alert from '@mui/material/Alert';
 import Box from '@mui/material/Box';
 import Link from '@mui/material/Link';
-import Paper from '@mui/material/Paper';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import type { ReactNode } from 'react';
@@ -48,14 +47,6 @@ export function AthleteProfile({ athleteId }: { athleteId: string }) {
           </div>
         ))}
       </Box>
-      <Paper component="section" variant="outlined" aria-label="Results" sx={{ p: { xs: 2, sm: 3 } }}>
-        <Typography variant="h2" sx={{ mb: 1 }}>
-          Results
-        </Typography>
-        <Typography sx={{ color: 'text.secondary' }}>
-          Results will appear here: every time and score {athlete.firstName} posts at a meet, with the place and points it earned.
-        </Typography>
-      </Paper>
     </Stack>
   );
 }

@@ -23,6 +23,7 @@ import { EnterHint } from './enter-hint.js';
 import { EntryPickerDialog } from './entry-picker-dialog.js';
 import { EventFormDialog } from './event-form-dialog.js';
 import { LineupLinks } from './lineup-links.js';
+import { ResultsLinks } from './results-links.js';
 import { MeetDaySafety } from './meet-day-safety.js';
 import type { MeetPageState } from './meet-builder.js';
 import { MeetEventCard } from './meet-event-card.js';
@@ -84,6 +85,7 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
       {meet.canManage && <MeetOrganiserBar meet={meet} actions={actions} onNotice={setNotice} />}
       {enterable.length > 0 && <EnterHint meet={meet} clubs={clubs} />}
       <LineupLinks meet={meet} />
+      <ResultsLinks meet={meet} />
       <Box sx={{ display: 'grid', gap: 3, gridTemplateColumns: { xs: '1fr', md: 'minmax(0, 2fr) minmax(0, 1fr)' }, alignItems: 'start' }}>
         <Stack component="section" aria-labelledby="meet-events" spacing={2}>
           <Stack direction="row" sx={{ alignItems: 'center', justifyContent: 'space-between', gap: 1, flexWrap: 'wrap' }}>

@@ -125,6 +125,12 @@ export class ResultsReadRepository {
   }
 
   /** The rack's axe as it is now (its table belongs to the Rack; read here for the snapshot only). */
+  /** The axe a coach assigned to the entry in the meet's lineup, if any. */
+  async lineupAxeId(entryId: string): Promise<string | null> {
+    const rows = await this.db.query<{ axeId: string | null }[]>('SELECT axe_id AS axeId FROM lineup_assignments WHERE entry_id = ?', [entryId]);
+    return rows[0]?.axeId ?? null;
+  }
+
   async axeSetup(axeId: string): Promise<AxeSetup | null> {
     return (await this.axes('id = ?', [axeId]))[0] ?? null;
   }

@@ -48,7 +48,10 @@ export class ResultsService {
     const entry = await this.meetsRepo.entries.findOne({ where: { id: input.entryId }, relations: { meetEvent: { eventType: true, meet: true } } });
     if (!entry) throw DomainError.notFound('That entry');
     const event = entry.meetEvent;
-    const axe = input.axeId ? await this.read.axeSetup(input.axeId) : null;
+    // With no axe picked and no head typed, the axe the coach gave this entry in the lineup is used.
+    const typedHead = input.grind != null || input.bevelIncludedDeg != null || input.chiselWidthMm != null;
+    const axeId = input.axeId ?? (typedHead ? null : await this.read.lineupAxeId(input.entryId));
+    const axe = axeId ? await this.read.axeSetup(axeId) : null;
     if (input.axeId && !axe) throw DomainError.badInput('axeId', 'That axe is not in the rack.');
     const posted = postedFromInput(input, {
       kind: event.eventType.resultKind, eventName: event.eventType.name, clubId: entry.clubId,

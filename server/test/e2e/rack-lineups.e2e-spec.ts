@@ -3,6 +3,7 @@ import { beforeAll, describe, expect, it } from '@jest/globals';
 import { errorCode } from '../utils/graphql.js';
 import { addAthlete, addMeetEvent, createMeet, drawOrder, enter, meetInput, setMeetStatus } from '../utils/meet-operations.js';
 import { addAxe, assignLineup, axeInput, clearLineupAssignment, lineup, lineupOverrides, useRackApp } from '../utils/rack-operations.js';
+import { recordResult } from '../utils/results-operations.js';
 
 let n = 0;
 const unique = (): string => `${process.pid}${Date.now().toString(36)}${++n}`;
@@ -131,5 +132,16 @@ describe('lineups: athletes and axes for a meet (real MariaDB)', () => {
     expect(seen.data?.lineup.canManage).toBe(false);
     expect(seen.data?.lineup.entries.find((e) => e.entryId === entryId)?.assignment?.axeLabel).toBeTruthy();
     expect(errorCode(await assignLineup(ctx.app, ctx.athlete, { entryId }))).toBe('FORBIDDEN');
+  });
+  it('fills the head of a result posted for a lineup entry from the axe assigned to it', async () => {
+    const entryId = await entryFor((await athlete('EXPERIENCED')).id);
+    const a = await axeWith({ grind: 'COMPOUND', bevelIncludedDeg: 16, chiselWidthMm: 12.7 });
+    expect((await assignLineup(ctx.app, ctx.coach, { entryId, axeId: a.id })).errors).toBeUndefined();
+    await setMeetStatus(ctx.app, ctx.organiser, meetId, 'CLOSED');
+    await setMeetStatus(ctx.app, ctx.organiser, meetId, 'RUNNING');
+    const res = await recordResult(ctx.app, ctx.organiser, { entryId, status: 'FINISHED', times: ['41.20'] });
+    expect(res.errors).toBeUndefined();
+    const posted = res.data!.recordResult.results.find((r) => r.entryId === entryId);
+    expect(posted).toMatchObject({ axeLabel: a.label, grind: 'COMPOUND', bevelIncludedDeg: 16, chiselWidthMm: 12.7 });
   });
 });

@@ -1,5 +1,7 @@
 import Button from '@mui/material/Button';
+import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
+import { DIVISION_LABELS } from '@endgrain/shared';
 import { Link as RouterLink } from 'react-router';
 
 import { paths } from '../../../config/paths.js';
@@ -11,7 +13,9 @@ const POSTABLE = ['CLOSED', 'RUNNING', 'PUBLISHED'];
 export function ResultsLinks({ meet }: { meet: MeetDetail }) {
   const canRead = meet.status === 'PUBLISHED' || meet.status === 'ARCHIVED' || meet.canManage;
   const canPost = meet.canManage && POSTABLE.includes(meet.status);
-  if (!canRead && !canPost) return null;
+  // Handicap starts suit timed events for one athlete on the same block size.
+  const handicapEvents = meet.canManage ? meet.events.filter((e) => e.eventType.resultKind === 'TIMED' && e.eventType.teamSize === 1) : [];
+  if (!canRead && !canPost && handicapEvents.length === 0) return null;
   return (
     <Stack component="nav" aria-label="Results" direction="row" sx={{ gap: 2, flexWrap: 'wrap' }}>
       {canRead && (
@@ -24,6 +28,11 @@ export function ResultsLinks({ meet }: { meet: MeetDetail }) {
           Post results
         </Button>
       )}
+      {handicapEvents.map((e) => (
+        <Link key={e.id} component={RouterLink} to={paths.handicapMarks.href(meet.id, e.id)} sx={{ minHeight: 44, display: 'inline-flex', alignItems: 'center' }}>
+          Handicap marks: {e.eventType.name}, {DIVISION_LABELS[e.division]}
+        </Link>
+      ))}
     </Stack>
   );
 }

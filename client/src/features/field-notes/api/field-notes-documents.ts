@@ -199,10 +199,12 @@ const deleteFieldNoteDraft: TypedDocumentNode<{ deleteFieldNoteDraft: boolean },
   }
 `;
 
-const markFieldNoteRead: TypedDocumentNode<{ markFieldNoteRead: Pick<FieldNote, 'id' | 'readAt'> }, Id & { read: boolean }> = gql`
+// isDraftView is part of a note's cache key (lib/apollo.ts): without it the answer would not reach the open page.
+const markFieldNoteRead: TypedDocumentNode<{ markFieldNoteRead: Pick<FieldNote, 'id' | 'isDraftView' | 'readAt'> }, Id & { read: boolean }> = gql`
   mutation MarkFieldNoteRead($id: ID!, $read: Boolean!) {
     markFieldNoteRead(id: $id, read: $read) {
       id
+      isDraftView
       readAt
     }
   }

@@ -17,6 +17,9 @@ export E2E_SHOT_DIR="${E2E_SHOT_DIR:-$DATA_DIR/screenshots}"
 source "$ROOT/scripts/env.sh"
 source "$ROOT/scripts/lib/mariadb.sh"
 REPORTS="$DATA_DIR/reports"
+# `npm test -- browser server` runs only the named suites and checks (for contributors); CI runs all.
+ONLY=" $* "
+wanted() { [[ "$ONLY" == "  " || "$ONLY" == *" $1 "* ]]; }
 
 set -e
 ensure_node_modules
@@ -40,12 +43,14 @@ set +e
 # Each step writes a Jest JSON report, or a one-line pass/fail for the checks.
 check() {
   local name=$1; shift
+  wanted "$name" || return 0
   say "check: $name"
   if (cd "$ROOT" && "$@") >"$REPORTS/$name.log" 2>&1; then echo pass >"$REPORTS/$name.check"
   else echo fail >"$REPORTS/$name.check"; cat "$REPORTS/$name.log"; fi
 }
 suite() {
   local name=$1 dir=$2; shift 2
+  wanted "$name" || return 0
   say "suite: $name"
   (cd "$ROOT/$dir" && "$@" --json --outputFile="$REPORTS/$name.json") 2>&1 | grep -v '^\s*$' | tail -n 60
 }
@@ -60,4 +65,4 @@ suite server server $JEST --runInBand --forceExit
 suite client client npx jest --config jest.config.cjs
 suite browser client npx jest --config e2e/jest.config.cjs --runInBand
 
-node "$ROOT/scripts/summarise-tests.mjs" "$REPORTS"
+node "$ROOT/scripts/summarise-tests.mjs" "$REPORTS" "$@"

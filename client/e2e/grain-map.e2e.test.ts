@@ -5,7 +5,7 @@ import type { Browser, Page } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
 import { signInThroughForm } from './support/accounts';
-import { DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot, settled } from './support/browser';
 
 // The Larchmere coach comes from the seed (seeds/src/demo-league.ts); the past seasons of men's
 // underhand results on quaking aspen come from the seed step's seedHistory (server/src/insights/seed-history.ts).
@@ -26,7 +26,8 @@ async function openAspenChisel(page: Page, shot: string, violations: string[]) {
   await table.waitFor();
   await pick(page, 'Species', 'Quaking aspen');
   await page.waitForURL(/species=quaking-aspen/);
-  await expect(table.getByRole('rowheader').allTextContents()).resolves.toEqual(['quaking aspen']);
+  // The address changes first; the map re-renders just after it.
+  await expect(settled(() => table.getByRole('rowheader').allTextContents(), ['quaking aspen'])).resolves.toEqual(['quaking aspen']);
   violations.push(...(await seriousViolations(page)).map((v) => `${shot} map: ${v}`));
   await screenshot(page, `${shot}-map`);
 

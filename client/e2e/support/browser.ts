@@ -42,3 +42,18 @@ export async function openSession(browser: Browser, device: typeof PHONE | typeo
 export async function screenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: `${SHOT_DIR}/${name}.png`, fullPage: true });
 }
+
+/**
+ * Reads a value until it equals what is expected, or gives up after the timeout and returns the
+ * last reading (so the test's own assertion prints the difference). For screens that re-render
+ * after a navigation, where a single read can still see the previous view.
+ */
+export async function settled<T>(read: () => Promise<T>, expected: T, timeoutMs = 10_000): Promise<T> {
+  const until = Date.now() + timeoutMs;
+  let value = await read();
+  while (JSON.stringify(value) !== JSON.stringify(expected) && Date.now() < until) {
+    await new Promise((resolve) => setTimeout(resolve, 100));
+    value = await read();
+  }
+  return value;
+}

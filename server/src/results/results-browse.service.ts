@@ -1,8 +1,10 @@
 import { Inject, Injectable } from '@nestjs/common';
 import { personalBests, speciesById } from '@endgrain/shared';
 
+import type { AuthUser } from '../common/auth/auth-user.js';
 import { DomainError } from '../common/errors/domain-error.js';
 import { LeagueRepository } from '../league/league.repository.js';
+import { canSeeAxe } from '../rack/rack-access.js';
 import type { PageInput, RecordsFilter, ResultsFilter, ResultsSort } from './dto/result.inputs.js';
 import type { ResultAuditModel, ResultModel, ResultsPageModel } from './models/result.model.js';
 import type { AthleteResultsModel, ResultRecordModel } from './models/standings.model.js';
@@ -11,6 +13,8 @@ import { ResultsExplorerRepository, type ExplorerFilter, type ExplorerSort } fro
 import { ResultsReadRepository } from './results-read.repository.js';
 
 export const MAX_PAGE_SIZE = 100;
+/** An axe page lists at most this many of its latest results. */
+export const AXE_RESULTS_LIMIT = 50;
 const DEFAULT_SORT: ExplorerSort = { field: 'TIME', direction: 'ASC' };
 
 /** Reading published results across clubs: the explorer, records, an athlete's results, the audit log. */
@@ -63,6 +67,13 @@ export class ResultsBrowseService {
       personalBests: bests.map((b) => ({ eventTypeId: b.eventTypeId, eventName: b.eventName, diameterMm: b.diameterMm, result: b.result })),
       results,
     };
+  }
+
+  /** An axe's latest published results, each with the head snapshot it was chopped with; seen by whoever may see the axe. */
+  async axeResults(actor: AuthUser | null, axeId: string): Promise<ResultModel[]> {
+    const axe = await this.read.findAxe(axeId);
+    if (!axe || !canSeeAxe(actor, axe)) throw DomainError.notFound('That axe');
+    return this.hydrator.models(await this.read.axeResults(axeId, AXE_RESULTS_LIMIT));
   }
 
   async audit(meetId: string): Promise<ResultAuditModel[]> {

@@ -2,6 +2,7 @@ import { Inject, Injectable } from '@nestjs/common';
 import { DataSource, In } from 'typeorm';
 
 import { AthleteEntity } from '../league/entities/athlete.entity.js';
+import { AxeEntity } from '../rack/entities/axe.entity.js';
 import { ClubEntity } from '../league/entities/club.entity.js';
 import { EntryAthleteEntity } from '../meets/entities/entry-athlete.entity.js';
 import { EventTypeEntity } from '../meets/entities/event-type.entity.js';
@@ -90,6 +91,23 @@ export class ResultsReadRepository {
       .orderBy('r.meet_date', 'ASC')
       .addOrderBy('r.id', 'ASC')
       .getMany();
+  }
+
+  /** Published results chopped with this axe, newest first. */
+  axeResults(axeId: string, limit: number): Promise<ResultEntity[]> {
+    return this.db
+      .getRepository(ResultEntity)
+      .createQueryBuilder('r')
+      .innerJoin(MeetEntity, 'm', 'm.id = r.meet_id AND m.status IN (:...visible)', { visible: VISIBLE_STATUSES })
+      .where('r.axe_id = :axeId', { axeId })
+      .orderBy('r.meet_date', 'DESC')
+      .addOrderBy('r.id', 'ASC')
+      .limit(limit)
+      .getMany();
+  }
+
+  findAxe(axeId: string): Promise<Pick<AxeEntity, 'id' | 'clubId' | 'isPublic'> | null> {
+    return this.db.getRepository(AxeEntity).findOne({ where: { id: axeId }, select: { id: true, clubId: true, isPublic: true } });
   }
 
   meetStandings(meetId: string): Promise<MeetStandingEntity[]> {

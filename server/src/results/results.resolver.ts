@@ -6,7 +6,7 @@ import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { Public } from '../common/auth/public.decorator.js';
 import { Roles } from '../common/auth/roles.decorator.js';
 import { CorrectResultInput, PageInput, RecordResultInput, RecordsFilter, ResultsFilter, ResultsSort } from './dto/result.inputs.js';
-import { MeetEventResultsModel, MeetResultsModel, PublishResultsPayload, ResultAuditModel, ResultsPageModel } from './models/result.model.js';
+import { MeetEventResultsModel, MeetResultsModel, PublishResultsPayload, ResultAuditModel, ResultModel, ResultsPageModel } from './models/result.model.js';
 import { AthleteResultsModel, ResultRecordModel } from './models/standings.model.js';
 import { PublishService } from './publish.service.js';
 import { ResultsBrowseService } from './results-browse.service.js';
@@ -30,6 +30,12 @@ export class ResultsResolver {
   @Public()
   athleteResults(@Args('athleteId', { type: () => ID }) athleteId: string): Promise<AthleteResultsModel> {
     return this.browseService.athlete(athleteId);
+  }
+
+  @Query(() => [ResultModel], { description: "An axe's latest published results (at most 50), newest first; for whoever may see the axe" })
+  @Public()
+  axeResults(@CurrentUser() actor: AuthUser | null, @Args('axeId', { type: () => ID }) axeId: string): Promise<ResultModel[]> {
+    return this.browseService.axeResults(actor, axeId);
   }
 
   @Query(() => [ResultRecordModel], { description: 'Best published result per event, species and diameter' })

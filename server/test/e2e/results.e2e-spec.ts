@@ -3,10 +3,10 @@ import type { INestApplication } from '@nestjs/common';
 
 import { errorCode } from '../utils/graphql.js';
 import { waitForMail } from '../utils/mail-sink.js';
-import { addAxe, axeInput, logService } from '../utils/rack-operations.js';
+import { addAxe, axeInput, logService, updateAxe } from '../utils/rack-operations.js';
 import { lookupIds, type Ids } from '../utils/meet-operations.js';
 import {
-  correctResult, importSheet, meetResults, meetStandings, publishMeetResults, recordResult, resultAudit, resultsMeet, seasonStandings,
+  axeResults, correctResult, importSheet, meetResults, meetStandings, publishMeetResults, recordResult, resultAudit, resultsMeet, seasonStandings,
   resultsActors, type ResultsActors,
 } from '../utils/results-operations.js';
 import { createTestApp } from '../utils/test-app.js';
@@ -150,6 +150,27 @@ describe('posting, ranking, correcting and publishing results (real MariaDB)', (
     expect(JSON.parse(audit[0]!.after)).toMatchObject({ rawTimes: [3900], place: 1, points: 7 });
     expect(audit).toHaveLength(6);
     expect(errorCode(await resultAudit(app, tokens.coach, meetId))).toBe('FORBIDDEN');
+  });
+
+  it("lists an axe's published results with the head each was chopped with, to whoever may see the axe", async () => {
+    const { meetId, athletes } = await resultsMeet(app, ids, tokens);
+    const added = (await addAxe(app, tokens.coach, ids.clubs.LARCH, axeInput({ grind: 'CONVEX', bevelIncludedDeg: 30, chiselWidthMm: null }))).data!.addAxe;
+    for (const [i, x] of athletes.entries()) {
+      await recordResult(app, tokens.organiser, { entryId: x.entryId, status: 'FINISHED', times: [`${40 + i}.00`], ...(i === 0 ? { axeId: added.id } : {}) });
+    }
+    // Not published yet: nothing to show, even to the club.
+    expect((await axeResults(app, added.id, tokens.coach)).data?.axeResults).toEqual([]);
+    await publishMeetResults(app, tokens.organiser, meetId);
+    await logService(app, tokens.coach, { axeId: added.id, kind: 'REGRIND', doneOn: new Date().toISOString().slice(0, 10), doneBy: 'Test grinder', setup: { bevelIncludedDeg: 34 } });
+
+    const listed = (await axeResults(app, added.id, tokens.athlete)).data!.axeResults;
+    // The result keeps the 30° it was chopped with, not the 34° of the later regrind.
+    expect(listed.map((r) => [r.meetId, r.entryId, r.totalHundredths, r.place, r.bevelIncludedDeg])).toEqual([[meetId, athletes[0]!.entryId, 4000, 1, 30]]);
+    // A private axe is not found outside its club; once public, anyone may read its results.
+    expect(errorCode(await axeResults(app, added.id, tokens.otherCoach))).toBe('NOT_FOUND');
+    expect(errorCode(await axeResults(app, added.id))).toBe('NOT_FOUND');
+    expect((await updateAxe(app, tokens.coach, added.id, axeInput({ label: added.label, grind: 'CONVEX', bevelIncludedDeg: 34, chiselWidthMm: null, isPublic: true }))).errors).toBeUndefined();
+    expect((await axeResults(app, added.id)).data!.axeResults).toHaveLength(1);
   });
 
   it('states the season tie-break', async () => {

@@ -80,6 +80,10 @@ export function athleteResults(app: INestApplication, athleteId: string) {
     app, 'query($a: ID!) { athleteResults(athleteId: $a) { name personalBests { eventName diameterMm result { totalHundredths } } results { meetId place } } }', { a: athleteId });
 }
 
+export function axeResults(app: INestApplication, axeId: string, token?: string) {
+  return gql<{ axeResults: (ResultShape & { meetId: string })[] }>(app, `query($a: ID!) { axeResults(axeId: $a) { meetId ${RESULT} } }`, { a: axeId }, { token });
+}
+
 export function resultAudit(app: INestApplication, token: string | undefined, meetId: string) {
   return gql<{ resultAudit: { action: string; reason: string | null; byName: string | null; before: string | null; after: string }[] }>(
     app, 'query($m: ID!) { resultAudit(meetId: $m) { action reason byName before after } }', { m: meetId }, { token });

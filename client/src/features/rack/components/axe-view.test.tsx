@@ -40,7 +40,7 @@ describe('AxeView', () => {
     const history = screen.getByRole('list', { name: 'Service history of Race 3' });
     expect(within(history).getByText('2026-09-20 · Regrind · Hale Dunmore')).toBeInTheDocument();
     expect(within(history).getByText('Bevel: 16° included (8° per side) → 15° included (7.5° per side)')).toBeInTheDocument();
-    expect(screen.getByRole('region', { name: 'Results chopped with it' })).toBeInTheDocument();
+    expect(screen.getByRole('region', { name: 'Results with this axe' })).toBeInTheDocument();
     expect(screen.getByRole('region', { name: 'Trials run with it' })).toBeInTheDocument();
   });
 

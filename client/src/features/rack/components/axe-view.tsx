@@ -7,7 +7,7 @@ import Link from '@mui/material/Link';
 import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link as RouterLink } from 'react-router';
 
 import { PageHeading } from '../../../components/ui/page-heading.js';
@@ -31,9 +31,11 @@ export interface AxeViewProps {
   units: UnitPreference;
   /** Today's date (YYYY-MM-DD) for a new service entry; passed in so tests can pin it. */
   today: string;
+  /** The results chopped with this axe, rendered by the results feature (features never import each other). */
+  results?: ReactNode;
 }
 
-export function AxeView({ axeId, units, today }: AxeViewProps) {
+export function AxeView({ axeId, units, today, results }: AxeViewProps) {
   const { data, loading, error } = useQuery(rackDocuments.axe, { variables: { id: axeId } });
   const [dialog, setDialog] = useState<'edit' | 'service' | null>(null);
   const [notice, setNotice] = useState<string>();
@@ -81,8 +83,8 @@ export function AxeView({ axeId, units, today }: AxeViewProps) {
       <SectionCard title="Service history">
         <ServiceHistory services={axe.services} units={units} label={axe.label} />
       </SectionCard>
-      <SectionCard title="Results chopped with it">
-        <Typography sx={{ color: 'text.secondary' }}>Results posted with this axe will be listed here, each with the head setup it was chopped with.</Typography>
+      <SectionCard title="Results with this axe">
+        {results ?? <Typography sx={{ color: 'text.secondary' }}>Published results chopped with this axe are listed here.</Typography>}
       </SectionCard>
       <SectionCard title="Trials run with it">
         <AxeTrials axeId={axe.id} />

@@ -8,6 +8,7 @@ import type {
   MeetResults,
   RackAxe,
   RecordResultInput,
+  Result,
   ResultRecord,
   ResultsFilter,
   ResultsPage,
@@ -200,6 +201,15 @@ const athleteResults: TypedDocumentNode<{ athleteResults: AthleteResults }, { at
   ${RESULT_FIELDS}
 `;
 
+const axeResults: TypedDocumentNode<{ axeResults: Result[] }, { axeId: string }> = gql`
+  query AxeResults($axeId: ID!) {
+    axeResults(axeId: $axeId) {
+      ...ResultFields
+    }
+  }
+  ${RESULT_FIELDS}
+`;
+
 const records: TypedDocumentNode<{ records: ResultRecord[] }, { filter: { seasonId?: string; eventTypeId?: string; speciesId?: string } }> = gql`
   query ResultRecords($filter: RecordsFilter) {
     records(filter: $filter) {
@@ -235,4 +245,4 @@ const clubAxes: TypedDocumentNode<{ rack: { clubId: string; axes: RackAxe[] } },
   }
 `;
 
-export const resultsDocuments = { meetResults, recordResult, correctResult, publishMeetResults, results, explorerOptions, athleteResults, records, clubAxes };
+export const resultsDocuments = { meetResults, recordResult, correctResult, publishMeetResults, results, explorerOptions, athleteResults, axeResults, records, clubAxes };

@@ -118,7 +118,8 @@ export const routeTree: RouteObject[] = [
       { path: paths.results.path, element: <ResultsExplorerPage /> },
       { path: paths.records.path, element: <RecordsPage /> },
       { path: paths.meetResults.path, element: <MeetResultsPage /> },
-      { path: paths.postResults.path, element: <RequireAuth roles={['ORGANISER']}><PostResultsPage /></RequireAuth> },
+      // Organisers and the meet's appointed timekeepers: the page itself says who may post.
+      { path: paths.postResults.path, element: <RequireAuth><PostResultsPage /></RequireAuth> },
       { path: paths.seasonStandings.path, element: <SeasonStandingsPage /> },
       { path: '*', element: <NotFoundPage /> },
     ],

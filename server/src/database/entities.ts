@@ -16,6 +16,7 @@ import { EventTypeEntity } from '../meets/entities/event-type.entity.js';
 import { MeetChangeEntity } from '../meets/entities/meet-change.entity.js';
 import { MeetEventEntity } from '../meets/entities/meet-event.entity.js';
 import { MeetEntity } from '../meets/entities/meet.entity.js';
+import { MeetTimekeeperEntity } from '../meets/entities/meet-timekeeper.entity.js';
 import { AxePhotoEntity } from '../rack/entities/axe-photo.entity.js';
 import { AxeServiceEntity } from '../rack/entities/axe-service.entity.js';
 import { AxeEntity } from '../rack/entities/axe.entity.js';
@@ -47,6 +48,7 @@ export const ENTITIES = [
   EntryEntity,
   EntryAthleteEntity,
   MeetChangeEntity,
+  MeetTimekeeperEntity,
   AxeEntity,
   AxeServiceEntity,
   AxePhotoEntity,

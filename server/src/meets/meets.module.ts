@@ -7,10 +7,12 @@ import { MeetEventsService } from './meet-events.service.js';
 import { MeetsRepository } from './meets.repository.js';
 import { MeetsResolver } from './meets.resolver.js';
 import { MeetsService } from './meets.service.js';
+import { TimekeepersResolver } from './timekeepers.resolver.js';
+import { TimekeepersService } from './timekeepers.service.js';
 
 @Module({
   imports: [LeagueModule],
-  providers: [MeetsRepository, MeetsService, MeetEventsService, EntriesService, EventTypesService, MeetsResolver],
-  exports: [MeetsRepository, MeetsService],
+  providers: [MeetsRepository, MeetsService, MeetEventsService, EntriesService, EventTypesService, MeetsResolver, TimekeepersService, TimekeepersResolver],
+  exports: [MeetsRepository, MeetsService, TimekeepersService],
 })
 export class MeetsModule {}

@@ -7,6 +7,8 @@ import { EventTypeEntity } from './entities/event-type.entity.js';
 import { MeetChangeEntity } from './entities/meet-change.entity.js';
 import { MeetEventEntity } from './entities/meet-event.entity.js';
 import { MeetEntity } from './entities/meet.entity.js';
+import { MeetTimekeeperEntity } from './entities/meet-timekeeper.entity.js';
+import { UserEntity } from '../users/entities/user.entity.js';
 
 export interface MeetListFilter {
   seasonId?: string | null;
@@ -40,6 +42,28 @@ export class MeetsRepository {
   }
   get changes() {
     return this.db.getRepository(MeetChangeEntity);
+  }
+  get timekeepers() {
+    return this.db.getRepository(MeetTimekeeperEntity);
+  }
+
+  async isTimekeeper(meetId: string, userId: string): Promise<boolean> {
+    return (await this.timekeepers.countBy({ meetId, userId })) > 0;
+  }
+
+  /** A meet's timekeepers with their names and addresses, in the order they were appointed. */
+  timekeepersOf(meetId: string): Promise<{ userId: string; displayName: string; email: string; appointedAt: Date }[]> {
+    return this.timekeepers
+      .createQueryBuilder('t')
+      .innerJoin(UserEntity, 'u', 'u.id = t.user_id')
+      .select(['t.user_id AS userId', 'u.display_name AS displayName', 'u.email AS email', 't.created_at AS appointedAt'])
+      .where('t.meet_id = :meetId', { meetId })
+      .orderBy('t.created_at', 'ASC')
+      .getRawMany();
+  }
+
+  findUserByEmail(email: string): Promise<Pick<UserEntity, 'id' | 'displayName'> | null> {
+    return this.db.getRepository(UserEntity).findOne({ where: { email }, select: { id: true, displayName: true } });
   }
 
   list(filter: MeetListFilter): Promise<MeetEntity[]> {

@@ -42,7 +42,7 @@ export class MeetsService {
 
   async detail(actor: AuthUser | null, id: string, now = new Date()): Promise<MeetDetailModel> {
     const meet = await this.visibleMeet(actor, id);
-    const [events, entries] = await Promise.all([this.repo.eventsOf(id), this.repo.entriesOfMeet(id)]);
+    const [events, entries, isTimekeeper] = await Promise.all([this.repo.eventsOf(id), this.repo.entriesOfMeet(id), actor ? this.repo.isTimekeeper(id, actor.id) : false]);
     const counts = { events: events.length, entries: entries.length };
     const clubIds = actor?.role === 'ADMIN' ? (await this.league.clubs.find({ select: { id: true } })).map((c) => c.id) : (actor?.clubIds ?? []).filter((c) => canManageClub(actor, c));
     return {
@@ -50,6 +50,7 @@ export class MeetsService {
       events: events.map((e) => toMeetEventModel(e, entries)),
       canManage: canRunMeets(actor),
       enterableClubIds: clubIds,
+      isTimekeeper,
     };
   }
 

@@ -4,7 +4,7 @@ import { Args, ID, Mutation, Query, Resolver } from '@nestjs/graphql';
 import type { AuthUser } from '../common/auth/auth-user.js';
 import { CurrentUser } from '../common/auth/current-user.decorator.js';
 import { Public } from '../common/auth/public.decorator.js';
-import { Roles } from '../common/auth/roles.decorator.js';
+import { Roles, SignedIn } from '../common/auth/roles.decorator.js';
 import { CorrectResultInput, PageInput, RecordResultInput, RecordsFilter, ResultsFilter, ResultsSort } from './dto/result.inputs.js';
 import { MeetEventResultsModel, MeetResultsModel, PublishResultsPayload, ResultAuditModel, ResultModel, ResultsPageModel } from './models/result.model.js';
 import { AthleteResultsModel, ResultRecordModel } from './models/standings.model.js';
@@ -60,8 +60,8 @@ export class ResultsResolver {
     return this.browseService.audit(meetId);
   }
 
-  @Mutation(() => MeetEventResultsModel, { description: 'Post or change a result before the meet is published; the event is re-ranked' })
-  @Roles('ORGANISER')
+  @Mutation(() => MeetEventResultsModel, { description: "Post or change a result before the meet is published (organisers and the meet's timekeepers); the event is re-ranked" })
+  @SignedIn()
   recordResult(@CurrentUser() actor: AuthUser, @Args('input') input: RecordResultInput): Promise<MeetEventResultsModel> {
     return this.resultsService.record(actor, input);
   }

@@ -10,6 +10,7 @@ import type { MeetEventEntity } from '../meets/entities/meet-event.entity.js';
 import type { MeetEntity } from '../meets/entities/meet.entity.js';
 import { toEntryModel } from '../meets/meets.mappers.js';
 import { MeetsRepository } from '../meets/meets.repository.js';
+import { POST_REFUSAL, TimekeepersService } from '../meets/timekeepers.service.js';
 import { MeetStatusEnum, ResultKindEnum } from '../meets/models/meets.enums.js';
 import type { CorrectResultInput, RecordResultInput } from './dto/result.inputs.js';
 import type { MeetEventResultsModel, MeetResultsModel, ResultModel } from './models/result.model.js';
@@ -34,6 +35,7 @@ export class ResultsService {
     @Inject(ResultsReadRepository) private readonly read: ResultsReadRepository,
     @Inject(ResultsWriter) private readonly writer: ResultsWriter,
     @Inject(ResultHydrator) private readonly hydrator: ResultHydrator,
+    @Inject(TimekeepersService) private readonly timekeepers: TimekeepersService,
   ) {}
 
   record(actor: AuthUser, input: RecordResultInput): Promise<MeetEventResultsModel> {
@@ -48,6 +50,7 @@ export class ResultsService {
     const entry = await this.meetsRepo.entries.findOne({ where: { id: input.entryId }, relations: { meetEvent: { eventType: true, meet: true } } });
     if (!entry) throw DomainError.notFound('That entry');
     const event = entry.meetEvent;
+    if (!(await this.timekeepers.canPost(actor, event.meetId))) throw DomainError.forbidden(POST_REFUSAL);
     // With no axe picked and no head typed, the axe the coach gave this entry in the lineup is used.
     const typedHead = input.grind != null || input.bevelIncludedDeg != null || input.chiselWidthMm != null;
     const axeId = input.axeId ?? (typedHead ? null : await this.read.lineupAxeId(input.entryId));
@@ -71,7 +74,9 @@ export class ResultsService {
     const organiser = canRunMeets(actor);
     if (!meet || (!isMeetPublic(meet.status) && !organiser)) throw DomainError.notFound('That meet');
     const published = resultsVisible(meet);
-    const events = published || organiser ? await this.meetsRepo.eventsOf(meetId) : [];
+    // A timekeeper sees the meet's results as they are posted, and posts them until they are published.
+    const timekeeper = !organiser && (await this.timekeepers.isTimekeeper(actor, meetId));
+    const events = published || organiser || timekeeper ? await this.meetsRepo.eventsOf(meetId) : [];
     const entries = events.length ? await this.meetsRepo.entriesOfMeet(meetId) : [];
     const results = events.length ? await this.hydrator.models(await this.read.resultsOfMeet(meetId)) : [];
     return {
@@ -83,7 +88,9 @@ export class ResultsService {
       seasonName: meet.season?.name ?? '',
       status: MeetStatusEnum[meet.status],
       published,
-      canRecord: organiser && CORRECTING.includes(meet.status),
+      canRecord: (organiser && CORRECTING.includes(meet.status)) || (timekeeper && RECORDING.includes(meet.status)),
+      canPublish: organiser,
+      asTimekeeper: timekeeper,
       events: events.map((e) => this.eventModel(e, entries, results)),
     };
   }

@@ -170,6 +170,24 @@ export class MeetDetailModel extends MeetModel {
 
   @Field(() => [ID], { description: "Clubs whose entries the caller may make" })
   enterableClubIds: string[];
+
+  @Field(() => Boolean, { description: "The caller is one of this meet's appointed timekeepers" })
+  isTimekeeper: boolean;
+}
+
+@ObjectType('MeetTimekeeper')
+export class MeetTimekeeperModel {
+  @Field(() => ID)
+  userId: string;
+
+  @Field(() => String)
+  displayName: string;
+
+  @Field(() => String)
+  email: string;
+
+  @Field(() => Date)
+  appointedAt: Date;
 }
 
 @ObjectType('MeetChange')

@@ -3,7 +3,7 @@ import type { Response } from 'express';
 
 import type { AuthUser } from '../../common/auth/auth-user.js';
 import { CurrentUser } from '../../common/auth/current-user.decorator.js';
-import { Roles } from '../../common/auth/roles.decorator.js';
+import { SignedIn } from '../../common/auth/roles.decorator.js';
 import { ResultsImportService } from './results-import.service.js';
 import type { UploadedSheet } from './sheet-text.js';
 import { SheetUploadInterceptor } from './sheet-upload.interceptor.js';
@@ -17,7 +17,8 @@ export class ResultsImportController {
   constructor(@Inject(ResultsImportService) private readonly importService: ResultsImportService) {}
 
   @Post(':id/results/import')
-  @Roles('ORGANISER')
+  // Organisers and the meet's timekeepers; the service checks which.
+  @SignedIn()
   @HttpCode(200)
   @UseInterceptors(SheetUploadInterceptor)
   async import(

@@ -5,6 +5,7 @@ import type { AuthUser } from '../../common/auth/auth-user.js';
 import { DomainError } from '../../common/errors/domain-error.js';
 import { LeagueRepository } from '../../league/league.repository.js';
 import { MeetsRepository } from '../../meets/meets.repository.js';
+import { POST_REFUSAL, TimekeepersService } from '../../meets/timekeepers.service.js';
 import { ResultsReadRepository } from '../results-read.repository.js';
 import { ResultsWriter } from '../results-writer.js';
 import { ResultsRepository } from '../results.repository.js';
@@ -29,11 +30,13 @@ export class ResultsImportService {
     @Inject(ResultsRepository) private readonly repo: ResultsRepository,
     @Inject(ResultsReadRepository) private readonly read: ResultsReadRepository,
     @Inject(ResultsWriter) private readonly writer: ResultsWriter,
+    @Inject(TimekeepersService) private readonly timekeepers: TimekeepersService,
   ) {}
 
   async import(actor: AuthUser, meetId: string, file: UploadedSheet | undefined, options: { dryRun: boolean }): Promise<ImportOutcome> {
     const meet = await this.meetsRepo.findMeet(meetId);
     if (!meet) throw DomainError.notFound('That meet');
+    if (!(await this.timekeepers.canPost(actor, meetId))) throw DomainError.forbidden(POST_REFUSAL);
     const statusProblem = meet.status === 'PUBLISHED'
       ? 'these results are published; correct them one at a time, with a reason'
       : IMPORTING.includes(meet.status) ? null : 'results can be imported once the meet has closed its entries';

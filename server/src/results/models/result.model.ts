@@ -82,7 +82,9 @@ export class MeetResultsModel {
   @Field(() => String) seasonName: string;
   @Field(() => MeetStatusEnum) status: MeetStatusEnum;
   @Field(() => Boolean, { description: 'Results are out for everyone to read' }) published: boolean;
-  @Field(() => Boolean, { description: 'The caller may post and correct results' }) canRecord: boolean;
+  @Field(() => Boolean, { description: 'The caller may post results now (and, as an organiser, correct published ones)' }) canRecord: boolean;
+  @Field(() => Boolean, { description: 'The caller may publish these results (organisers)' }) canPublish: boolean;
+  @Field(() => Boolean, { description: 'The caller sees these results as one of the meet\'s timekeepers' }) asTimekeeper: boolean;
   @Field(() => [MeetEventResultsModel], { description: 'Empty for visitors until the results are published' }) events: MeetEventResultsModel[];
 }
 

@@ -117,6 +117,7 @@ const meet: TypedDocumentNode<{ meet: MeetDetail }, { id: string }> = gql`
       ${MEET_FIELDS}
       canManage
       enterableClubIds
+      isTimekeeper
       events {
         ...MeetEventFields
       }

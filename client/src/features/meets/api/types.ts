@@ -109,6 +109,8 @@ export interface MeetDetail extends MeetSummary {
   __typename?: 'MeetDetail';
   canManage: boolean;
   enterableClubIds: string[];
+  /** The caller is one of this meet's appointed timekeepers. */
+  isTimekeeper: boolean;
   events: MeetEvent[];
 }
 

@@ -91,4 +91,17 @@ describe('MeetView', () => {
     expect(await screen.findByText('Wren Ashgrove')).toBeInTheDocument();
     expect(screen.queryByRole('link', { name: /Lineup and axes/ })).not.toBeInTheDocument();
   });
+
+  it("offers a meet's timekeeper posting until the results are published, and an outsider nothing", async () => {
+    const { unmount } = renderMeet(testMeet({ status: 'RUNNING', isTimekeeper: true, enterableClubIds: [] }));
+    const nav = await screen.findByRole('navigation', { name: 'Results' });
+    expect(within(nav).getByRole('link', { name: 'Post results' })).toHaveAttribute('href', '/results/meets/meet-1/post');
+    unmount();
+    const published = renderMeet(testMeet({ status: 'PUBLISHED', isTimekeeper: true, enterableClubIds: [] }));
+    expect(within(await screen.findByRole('navigation', { name: 'Results' })).queryByRole('link', { name: 'Post results' })).not.toBeInTheDocument();
+    published.unmount();
+    renderMeet(testMeet({ status: 'RUNNING', enterableClubIds: [] }));
+    await screen.findByRole('heading', { level: 1 });
+    expect(screen.queryByRole('link', { name: 'Post results' })).not.toBeInTheDocument();
+  });
 });

@@ -8,11 +8,13 @@ import { paths } from '../../../config/paths.js';
 import type { MeetDetail } from '../api/types.js';
 
 const POSTABLE = ['CLOSED', 'RUNNING', 'PUBLISHED'];
+/** A timekeeper posts until the results are published; corrections stay with organisers. */
+const TIMEKEEPING = ['CLOSED', 'RUNNING'];
 
-/** The way on to a meet's results: read them once published; organisers post them from entries closed on. */
+/** The way on to a meet's results: read them once published; organisers and the meet's timekeepers post them from entries closed on. */
 export function ResultsLinks({ meet }: { meet: MeetDetail }) {
-  const canRead = meet.status === 'PUBLISHED' || meet.status === 'ARCHIVED' || meet.canManage;
-  const canPost = meet.canManage && POSTABLE.includes(meet.status);
+  const canRead = meet.status === 'PUBLISHED' || meet.status === 'ARCHIVED' || meet.canManage || meet.isTimekeeper;
+  const canPost = (meet.canManage && POSTABLE.includes(meet.status)) || (meet.isTimekeeper && TIMEKEEPING.includes(meet.status));
   // Handicap starts suit timed events for one athlete on the same block size.
   const handicapEvents = meet.canManage ? meet.events.filter((e) => e.eventType.resultKind === 'TIMED' && e.eventType.teamSize === 1) : [];
   if (!canRead && !canPost && handicapEvents.length === 0) return null;

@@ -70,6 +70,7 @@ export function testMeet(overrides: Partial<MeetDetail> = {}): MeetDetail {
     requireMixedPairs: true,
     canManage: false,
     enterableClubIds: ['club-hollow'],
+    isTimekeeper: false,
     events: [testMeetEvent()],
     ...overrides,
   };

@@ -6,6 +6,7 @@ import type {
   ExplorerOptions,
   MeetEventResults,
   MeetResults,
+  MeetTimekeeper,
   RackAxe,
   RecordResultInput,
   Result,
@@ -104,6 +105,8 @@ const meetResults: TypedDocumentNode<{ meetResults: MeetResults }, { meetId: str
       status
       published
       canRecord
+      canPublish
+      asTimekeeper
       events {
         ...MeetEventResultsFields
       }
@@ -210,6 +213,26 @@ const axeResults: TypedDocumentNode<{ axeResults: Result[] }, { axeId: string }>
   ${RESULT_FIELDS}
 `;
 
+const TIMEKEEPER_FIELDS = 'userId displayName email appointedAt';
+
+const meetTimekeepers: TypedDocumentNode<{ meetTimekeepers: MeetTimekeeper[] }, { meetId: string }> = gql`
+  query MeetTimekeepers($meetId: ID!) {
+    meetTimekeepers(meetId: $meetId) { ${TIMEKEEPER_FIELDS} }
+  }
+`;
+
+const appointTimekeeper: TypedDocumentNode<{ appointTimekeeper: MeetTimekeeper[] }, { meetId: string; email: string }> = gql`
+  mutation AppointTimekeeper($meetId: ID!, $email: String!) {
+    appointTimekeeper(meetId: $meetId, email: $email) { ${TIMEKEEPER_FIELDS} }
+  }
+`;
+
+const removeTimekeeper: TypedDocumentNode<{ removeTimekeeper: MeetTimekeeper[] }, { meetId: string; userId: string }> = gql`
+  mutation RemoveTimekeeper($meetId: ID!, $userId: ID!) {
+    removeTimekeeper(meetId: $meetId, userId: $userId) { ${TIMEKEEPER_FIELDS} }
+  }
+`;
+
 const records: TypedDocumentNode<{ records: ResultRecord[] }, { filter: { seasonId?: string; eventTypeId?: string; speciesId?: string } }> = gql`
   query ResultRecords($filter: RecordsFilter) {
     records(filter: $filter) {
@@ -245,4 +268,4 @@ const clubAxes: TypedDocumentNode<{ rack: { clubId: string; axes: RackAxe[] } },
   }
 `;
 
-export const resultsDocuments = { meetResults, recordResult, correctResult, publishMeetResults, results, explorerOptions, athleteResults, axeResults, records, clubAxes };
+export const resultsDocuments = { meetResults, recordResult, correctResult, publishMeetResults, results, explorerOptions, athleteResults, axeResults, records, clubAxes, meetTimekeepers, appointTimekeeper, removeTimekeeper };

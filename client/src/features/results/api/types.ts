@@ -94,6 +94,8 @@ export interface MeetResults {
   status: MeetStatus;
   published: boolean;
   canRecord: boolean;
+  canPublish: boolean;
+  asTimekeeper: boolean;
   events: MeetEventResults[];
 }
 
@@ -208,4 +210,13 @@ export interface SheetProblem {
   row: number;
   column: string;
   message: string;
+}
+
+/** Someone an organiser appointed to post one meet's results. */
+export interface MeetTimekeeper {
+  __typename?: 'MeetTimekeeper';
+  userId: string;
+  displayName: string;
+  email: string;
+  appointedAt: string;
 }

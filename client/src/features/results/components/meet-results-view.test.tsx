@@ -15,14 +15,14 @@ const render = (meet: MeetResults, units: 'METRIC' | 'IMPERIAL' = 'METRIC') =>
 
 describe('MeetResultsView', () => {
   it('tells a visitor the results are not out yet', async () => {
-    render(testMeetResults({ canRecord: false, events: [] }));
+    render(testMeetResults({ canRecord: false, canPublish: false, events: [] }));
     expect(await screen.findByText(/Results for this meet are not out yet/)).toBeInTheDocument();
     expect(screen.queryByRole('button', { name: 'Publish results' })).not.toBeInTheDocument();
   });
 
   it('lists each event with place, athletes, club, time, points, head and block in the reader’s units', async () => {
     const tied = testResult({ id: 'r-2', entryId: 'e-2', label: 'Orla Pinecrest', athletes: [{ id: 'a-2', name: 'Orla Pinecrest' }], tied: true, points: 6.5, place: 1, penaltyHundredths: 200, condition: 'GREEN' });
-    render(testMeetResults({ published: true, status: 'PUBLISHED', canRecord: false, events: [testEventResults({ results: [testResult({ tied: true, points: 6.5 }), tied], waiting: [] })] }), 'IMPERIAL');
+    render(testMeetResults({ published: true, status: 'PUBLISHED', canRecord: false, canPublish: false, events: [testEventResults({ results: [testResult({ tied: true, points: 6.5 }), tied], waiting: [] })] }), 'IMPERIAL');
     const table = await screen.findByRole('table', { name: "Underhand chop · Men's results" });
     const rows = within(table).getAllByRole('row');
     // Hand-worked: (7 + 6) / 2 = 6.5 each; 6.35 mm = 0.25 in; a 200-hundredth penalty is +2 s.

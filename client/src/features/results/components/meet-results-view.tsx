@@ -47,7 +47,7 @@ export function MeetResultsView({ meetId, units }: { meetId: string; units: Unit
             {meet.published ? 'Correct results' : 'Post results'}
           </Button>
         )}
-        {meet.canRecord && meet.status === 'RUNNING' && posted && (
+        {meet.canPublish && meet.status === 'RUNNING' && posted && (
           <PublishResultsButton meetId={meet.meetId} meetName={meet.meetName} onPublished={setNotice} />
         )}
       </Stack>
@@ -56,7 +56,7 @@ export function MeetResultsView({ meetId, units }: { meetId: string; units: Unit
       )}
       {meet.canRecord && !meet.published && (
         <Alert severity="info">
-          Only organisers see these results until they are published.
+          Only organisers and this meet's timekeepers see these results until they are published.
           {!posted && ' Post them event by event, or upload the timekeepers’ sheet.'}
         </Alert>
       )}

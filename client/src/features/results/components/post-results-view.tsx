@@ -18,6 +18,7 @@ import type { UnitPreference } from '../api/types.js';
 import { formatDiameter } from '../lib/format-result.js';
 import { ResultsEntryTable } from './results-entry-table.js';
 import { SheetUpload } from './sheet-upload.js';
+import { TimekeepersPanel } from './timekeepers-panel.js';
 
 /** The organiser's meet-day screen: pick an event, type its results, or upload the whole sheet. */
 export function PostResultsView({ meetId, units }: { meetId: string; units: UnitPreference }) {
@@ -26,7 +27,19 @@ export function PostResultsView({ meetId, units }: { meetId: string; units: Unit
   if (loading && !data) return <PageLoading label="Loading the meet's entries" />;
   if (error || !data) return <Alert severity="error">{graphQLErrorDetails(error)[0]?.message}</Alert>;
   const meet = data.meetResults;
+  if (!meet.canPublish && !meet.asTimekeeper) {
+    return (
+      <Stack spacing={2}>
+        <PageHeading>{`Post results: ${meet.meetName}`}</PageHeading>
+        <Alert severity="info">Only organisers and the timekeepers they appoint for this meet post its results.</Alert>
+        <Button component={RouterLink} to={paths.meetResults.href(meetId)} variant="outlined" sx={{ alignSelf: 'flex-start' }}>See the results page</Button>
+      </Stack>
+    );
+  }
   const event = meet.events.find((e) => e.meetEventId === params.get('event')) ?? meet.events[0];
+  const waitingNote = meet.asTimekeeper && meet.published
+    ? 'These results are published; the meet’s organisers make any corrections.'
+    : 'Results can be posted once the meet has closed its entries.';
   return (
     <Stack spacing={3}>
       <PageHeading lead={meet.published ? 'These results are published: each change is a correction with a reason, kept on record.' : 'Type each run as the watches read, or upload the timekeepers’ sheet. Place and points are worked out for you.'}>
@@ -35,7 +48,7 @@ export function PostResultsView({ meetId, units }: { meetId: string; units: Unit
       <Stack direction="row" sx={{ gap: 1, flexWrap: 'wrap' }}>
         <Button component={RouterLink} to={paths.meetResults.href(meetId)} variant="outlined">See the results page</Button>
       </Stack>
-      {!meet.canRecord && <Alert severity="info">Results can be posted once the meet has closed its entries.</Alert>}
+      {!meet.canRecord && <Alert severity="info">{waitingNote}</Alert>}
       <SafetyNote title="On the course">
         Keep timekeepers and judges outside the clear zone while axes swing; edges sheathed between heats; stop the event for a loose head
         or cracked handle. The sanctioning body’s rules and the meet director’s call come first.
@@ -69,6 +82,7 @@ export function PostResultsView({ meetId, units }: { meetId: string; units: Unit
           )}
         </>
       )}
+      {meet.canPublish && !meet.published && <TimekeepersPanel meetId={meetId} />}
     </Stack>
   );
 }

@@ -28,6 +28,6 @@ export function testEventResults(over: Partial<MeetEventResults> = {}): MeetEven
 export function testMeetResults(over: Partial<MeetResults> = {}): MeetResults {
   return {
     __typename: 'MeetResults', meetId: 'meet-1', meetName: 'Hollow Pine Fall Chop', startsOn: '2026-10-17', venue: 'Hollow Pine landing',
-    seasonId: 'season-1', seasonName: '2026–27', status: 'RUNNING', published: false, canRecord: true, events: [testEventResults()], ...over,
+    seasonId: 'season-1', seasonName: '2026–27', status: 'RUNNING', published: false, canRecord: true, canPublish: true, asTimekeeper: false, events: [testEventResults()], ...over,
   };
 }

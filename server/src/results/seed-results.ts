@@ -43,7 +43,7 @@ export async function seedResults(db: DataSource, options: { meetId?: string; se
   const changes = entries.map((entry) => demoResult(entry, axes.filter((a) => a.clubId === entry.clubId), Array.from({ length: 10 }, random)));
   await db.transaction(async (m) => {
     const locked = (await repo.lockMeet(m, meet.id))!;
-    await new ResultsWriter(repo).write(m, locked, changes, { userId: null, action: 'RECORDED', reason: 'demo results' });
+    await new ResultsWriter(repo).write(m, locked, changes, { userId: meet.createdBy ?? null, action: 'RECORDED', reason: 'demo results' });
     await repo.setMeetStatus(m, meet.id, 'PUBLISHED');
   });
   return true;

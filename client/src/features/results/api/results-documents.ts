@@ -10,6 +10,7 @@ import type {
   RackAxe,
   RecordResultInput,
   Result,
+  ResultAuditEntry,
   ResultRecord,
   ResultsFilter,
   ResultsPage,
@@ -213,6 +214,12 @@ const axeResults: TypedDocumentNode<{ axeResults: Result[] }, { axeId: string }>
   ${RESULT_FIELDS}
 `;
 
+const resultAudit: TypedDocumentNode<{ resultAudit: ResultAuditEntry[] }, { meetId: string }> = gql`
+  query ResultAudit($meetId: ID!) {
+    resultAudit(meetId: $meetId) { id resultId entryId action reason byName at before after }
+  }
+`;
+
 const TIMEKEEPER_FIELDS = 'userId displayName email appointedAt';
 
 const meetTimekeepers: TypedDocumentNode<{ meetTimekeepers: MeetTimekeeper[] }, { meetId: string }> = gql`
@@ -268,4 +275,4 @@ const clubAxes: TypedDocumentNode<{ rack: { clubId: string; axes: RackAxe[] } },
   }
 `;
 
-export const resultsDocuments = { meetResults, recordResult, correctResult, publishMeetResults, results, explorerOptions, athleteResults, axeResults, records, clubAxes, meetTimekeepers, appointTimekeeper, removeTimekeeper };
+export const resultsDocuments = { meetResults, recordResult, correctResult, publishMeetResults, results, explorerOptions, athleteResults, axeResults, records, clubAxes, meetTimekeepers, appointTimekeeper, removeTimekeeper, resultAudit };

@@ -220,3 +220,17 @@ export interface MeetTimekeeper {
   email: string;
   appointedAt: string;
 }
+
+/** One change in a meet's results log; before and after are JSON snapshots of the result. */
+export interface ResultAuditEntry {
+  __typename?: 'ResultAudit';
+  id: string;
+  resultId: string;
+  entryId: string;
+  action: 'RECORDED' | 'CORRECTED' | 'IMPORTED';
+  reason: string | null;
+  byName: string | null;
+  at: string;
+  before: string | null;
+  after: string;
+}

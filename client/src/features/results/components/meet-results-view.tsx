@@ -15,10 +15,11 @@ import { PageLoading } from '../../../components/ui/page-loading.js';
 import { paths } from '../../../config/paths.js';
 import { graphQLErrorDetails } from '../../../lib/graphql-error-details.js';
 import { resultsDocuments } from '../api/results-documents.js';
-import type { UnitPreference } from '../api/types.js';
+import type { MeetResults, UnitPreference } from '../api/types.js';
 import { formatDay } from '../lib/format-day.js';
 import { EventResultsTable } from './event-results-table.js';
 import { PublishResultsButton } from './publish-results-button.js';
+import { ResultsChangeLog } from './results-change-log.js';
 
 /** A meet's results, event by event; organisers also get posting and publishing here. */
 export function MeetResultsView({ meetId, units }: { meetId: string; units: UnitPreference }) {
@@ -64,7 +65,18 @@ export function MeetResultsView({ meetId, units }: { meetId: string; units: Unit
         <EventResultsTable key={event.meetEventId} event={event} units={units} />
       ))}
       {meet.published && meet.events.length === 0 && <Typography>No events in this meet.</Typography>}
+      {meet.canPublish && posted && <ResultsChangeLog meetId={meet.meetId} labels={entryLabels(meet)} />}
       <Snackbar open={Boolean(notice)} autoHideDuration={8000} onClose={() => setNotice(undefined)} message={notice} />
     </Stack>
   );
+}
+
+/** "Ansel Birchfield, Underhand chop" for each entry id, for the change log. */
+function entryLabels(meet: MeetResults): Map<string, string> {
+  const labels = new Map<string, string>();
+  for (const e of meet.events) {
+    for (const r of e.results) labels.set(r.entryId, `${r.label}, ${e.eventName}`);
+    for (const w of e.waiting) labels.set(w.id, `${w.label}, ${e.eventName}`);
+  }
+  return labels;
 }

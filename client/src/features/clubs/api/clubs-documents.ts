@@ -1,6 +1,6 @@
 import { gql, type TypedDocumentNode } from '@apollo/client';
 
-import type { Athlete, AthleteInput, Club, ClubDetail, ClubInvitation, ClubRole } from './types.js';
+import type { Athlete, AthleteInput, Club, ClubDetail, ClubInput, ClubInvitation, ClubRole } from './types.js';
 
 const ATHLETE_FIELDS = gql`
   fragment AthleteFields on Athlete {
@@ -121,7 +121,22 @@ const acceptClubInvitation: TypedDocumentNode<{ acceptClubInvitation: string }, 
   }
 `;
 
+const updateClub: TypedDocumentNode<{ updateClub: Club }, { id: string; input: ClubInput }> = gql`
+  mutation UpdateClub($id: ID!, $input: ClubInput!) {
+    updateClub(id: $id, input: $input) {
+      id
+      name
+      shortName
+      region
+      colourPrimary
+      colourSecondary
+      athleteCount
+    }
+  }
+`;
+
 export const clubsDocuments = {
+  updateClub,
   clubs,
   club,
   athlete,

@@ -54,3 +54,12 @@ export interface AthleteInput {
   experience: ExperienceLevel;
   firstSeasonYear: number | null;
 }
+
+export interface ClubInput {
+  name: string;
+  shortName: string;
+  region: string;
+  contactEmail: string | null;
+  colourPrimary: string;
+  colourSecondary: string;
+}

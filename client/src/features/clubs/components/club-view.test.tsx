@@ -59,4 +59,30 @@ describe('ClubView', () => {
     await user.click(within(confirm).getByRole('button', { name: 'Keep Rowan' }));
     expect(screen.getByRole('dialog', { name: 'Edit Rowan Tamarack' })).toBeInTheDocument();
   });
+
+  it("lets a coach edit the club's details and puts the server's refusal next to the field", async () => {
+    const input = { name: 'Hollow Pine Woodsmen', shortName: 'CFORK', region: 'Upper Hollow', contactEmail: null, colourPrimary: '#2f5d3a', colourSecondary: testClub().colourSecondary };
+    const { user } = renderWithProviders({
+      element: <ClubView clubId="club-hollow" />,
+      mocks: [
+        clubMock(true),
+        noInvitations,
+        { request: { query: clubsDocuments.updateClub, variables: { id: 'club-hollow', input } }, result: { errors: [new GraphQLError('The short name "CFORK" is taken.', { extensions: { code: 'BAD_USER_INPUT', field: 'shortName' } })] } },
+      ],
+    });
+    await user.click(await screen.findByRole('button', { name: 'Edit club details' }));
+    const dialog = screen.getByRole('dialog', { name: 'Edit club details' });
+    const short = within(dialog).getByLabelText('Short name');
+    await user.clear(short);
+    await user.type(short, 'cfork');
+    await user.click(within(dialog).getByRole('button', { name: 'Save' }));
+    expect(await within(dialog).findByText('The short name "CFORK" is taken.')).toBeInTheDocument();
+    expect(short).toHaveAttribute('aria-invalid', 'true');
+  });
+
+  it('offers no club editing to a visitor', async () => {
+    renderWithProviders({ element: <ClubView clubId="club-hollow" />, mocks: [clubMock(false)] });
+    await screen.findByRole('grid', { name: 'Roster' });
+    expect(screen.queryByRole('button', { name: 'Edit club details' })).not.toBeInTheDocument();
+  });
 });

@@ -1,4 +1,5 @@
 import { useQuery } from '@apollo/client/react';
+import Edit from '@mui/icons-material/Edit';
 import PersonAdd from '@mui/icons-material/PersonAdd';
 import Alert from '@mui/material/Alert';
 import Button from '@mui/material/Button';
@@ -18,6 +19,7 @@ import { clubsDocuments } from '../api/clubs-documents.js';
 import type { Athlete } from '../api/types.js';
 import { AthleteFormDialog } from './athlete-form-dialog.js';
 import { ClubColours } from './club-colours.js';
+import { ClubFormDialog } from './club-form-dialog.js';
 import { InvitationsList } from './invitations-list.js';
 import { InviteForm } from './invite-form.js';
 import { RosterGrid } from './roster-grid.js';
@@ -25,6 +27,7 @@ import { RosterGrid } from './roster-grid.js';
 export function ClubView({ clubId }: { clubId: string }) {
   const { data, loading, error } = useQuery(clubsDocuments.club, { variables: { id: clubId } });
   const [editing, setEditing] = useState<{ athlete?: Athlete } | null>(null);
+  const [editingClub, setEditingClub] = useState(false);
   const [notice, setNotice] = useState<string>();
 
   if (loading && !data) return <PageLoading label="Loading the club" />;
@@ -44,6 +47,11 @@ export function ClubView({ clubId }: { clubId: string }) {
         <ClubColours primary={club.colourPrimary} secondary={club.colourSecondary} size={48} />
         <PageHeading lead={`${club.shortName} · ${club.region}`}>{club.name}</PageHeading>
       </Stack>
+      {club.canManage && (
+        <Button variant="outlined" startIcon={<Edit />} onClick={() => setEditingClub(true)} sx={{ alignSelf: 'flex-start' }}>
+          Edit club details
+        </Button>
+      )}
       {club.contactEmail && (
         <Typography>
           Contact: <Link href={`mailto:${club.contactEmail}`}>{club.contactEmail}</Link>
@@ -83,6 +91,7 @@ export function ClubView({ clubId }: { clubId: string }) {
         </SectionCard>
       )}
       {editing && <AthleteFormDialog clubId={club.id} athlete={editing.athlete} onClose={() => setEditing(null)} onDone={setNotice} />}
+      {editingClub && <ClubFormDialog club={club} onClose={() => setEditingClub(false)} onDone={setNotice} />}
       <NoticeToast message={notice} onClose={() => setNotice(undefined)} />
     </Stack>
   );

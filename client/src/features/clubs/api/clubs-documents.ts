@@ -27,18 +27,25 @@ const INVITATION_FIELDS = gql`
   }
 `;
 
+const CLUB_FIELDS = gql`
+  fragment ClubFields on Club {
+    id
+    name
+    shortName
+    region
+    colourPrimary
+    colourSecondary
+    athleteCount
+  }
+`;
+
 const clubs: TypedDocumentNode<{ clubs: Club[] }, Record<string, never>> = gql`
   query Clubs {
     clubs {
-      id
-      name
-      shortName
-      region
-      colourPrimary
-      colourSecondary
-      athleteCount
+      ...ClubFields
     }
   }
+  ${CLUB_FIELDS}
 `;
 
 const club: TypedDocumentNode<{ club: ClubDetail }, { id: string }> = gql`
@@ -124,15 +131,10 @@ const acceptClubInvitation: TypedDocumentNode<{ acceptClubInvitation: string }, 
 const updateClub: TypedDocumentNode<{ updateClub: Club }, { id: string; input: ClubInput }> = gql`
   mutation UpdateClub($id: ID!, $input: ClubInput!) {
     updateClub(id: $id, input: $input) {
-      id
-      name
-      shortName
-      region
-      colourPrimary
-      colourSecondary
-      athleteCount
+      ...ClubFields
     }
   }
+  ${CLUB_FIELDS}
 `;
 
 export const clubsDocuments = {

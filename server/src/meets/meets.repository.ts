@@ -1,5 +1,5 @@
 import { Inject, Injectable } from '@nestjs/common';
-import { DataSource } from 'typeorm';
+import { DataSource, In } from 'typeorm';
 
 import { EntryAthleteEntity } from './entities/entry-athlete.entity.js';
 import { EntryEntity } from './entities/entry.entity.js';
@@ -60,6 +60,12 @@ export class MeetsRepository {
       .where('t.meet_id = :meetId', { meetId })
       .orderBy('t.created_at', 'ASC')
       .getRawMany();
+  }
+
+  async userNames(ids: readonly string[]): Promise<Map<string, string>> {
+    if (ids.length === 0) return new Map();
+    const users = await this.db.getRepository(UserEntity).find({ where: { id: In([...new Set(ids)]) }, select: { id: true, displayName: true } });
+    return new Map(users.map((u) => [u.id, u.displayName]));
   }
 
   findUserByEmail(email: string): Promise<Pick<UserEntity, 'id' | 'displayName'> | null> {

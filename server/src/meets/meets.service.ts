@@ -11,6 +11,7 @@ import type { MeetInput, MeetsFilter } from './dto/meet.inputs.js';
 import { MeetChangeEntity } from './entities/meet-change.entity.js';
 import { MeetEntity } from './entities/meet.entity.js';
 import { toMeetEventModel, toMeetModel } from './meets.mappers.js';
+import { MeetScoringHooks } from './meet-scoring-hooks.js';
 import { MeetsRepository } from './meets.repository.js';
 import { pointsTable, positiveInt } from './meet.validation.js';
 import type { MeetChangeModel, MeetDetailModel, MeetModel } from './models/meet.model.js';
@@ -22,6 +23,7 @@ export class MeetsService {
   constructor(
     @Inject(MeetsRepository) private readonly repo: MeetsRepository,
     @Inject(LeagueRepository) private readonly league: LeagueRepository,
+    @Inject(MeetScoringHooks) private readonly scoringHooks: MeetScoringHooks,
   ) {}
 
   async list(actor: AuthUser | null, filter: MeetsFilter = {}, now = new Date()): Promise<MeetModel[]> {
@@ -73,15 +75,18 @@ export class MeetsService {
     await this.repo.db.transaction(async (m) => {
       await m.getRepository(MeetEntity).update({ id }, values);
       if (recorded && scoringChanged) {
+        const reason = text('reason', 'Reason', input.reason, 3, 180);
         const pick = (src: Record<string, unknown>): Record<string, never> => Object.fromEntries(SCORING_KEYS.map((k) => [k, src[k]])) as Record<string, never>;
         await m.getRepository(MeetChangeEntity).insert({
           id: randomUUID(),
           meetId: id,
           userId: actor.id,
-          summary: `Scoring changed: ${text('reason', 'Reason', input.reason, 3, 180)}`,
+          summary: `Scoring changed: ${reason}`,
           before: pick(meet as unknown as Record<string, unknown>),
           after: pick(values as unknown as Record<string, unknown>),
         });
+        // Places, points and standings follow the new scoring in the same transaction.
+        await this.scoringHooks.scoringChanged(m, id, { userId: actor.id, reason });
       }
     });
     return this.detail(actor, id, now);
@@ -111,7 +116,11 @@ export class MeetsService {
   async changes(id: string): Promise<MeetChangeModel[]> {
     await this.mustFind(id);
     const rows = await this.repo.changes.find({ where: { meetId: id }, order: { createdAt: 'DESC' } });
-    return rows.map((r) => ({ id: r.id, summary: r.summary, byUserId: r.userId, at: r.createdAt, before: JSON.stringify(r.before), after: JSON.stringify(r.after) }));
+    const names = await this.repo.userNames(rows.map((r) => r.userId).filter((u): u is string => u !== null));
+    return rows.map((r) => ({
+      id: r.id, summary: r.summary, byUserId: r.userId, byName: r.userId ? (names.get(r.userId) ?? null) : null,
+      at: r.createdAt, before: JSON.stringify(r.before), after: JSON.stringify(r.after),
+    }));
   }
 
   async mustFind(id: string): Promise<MeetEntity> {

@@ -81,6 +81,28 @@ export class ResultsWriter {
   }
 }
 
+/**
+ * After a meet's scoring changes: re-ranks every event with the meet's new scheme, rewrites the
+ * standings, and logs each result whose place or points moved as a correction with the reason.
+ * Runs in the caller's transaction. Returns how many results moved.
+ */
+export async function rescoreMeet(repo: ResultsRepository, m: EntityManager, meetId: string, options: { userId: string; reason: string }): Promise<number> {
+  const meet = await repo.lockMeet(m, meetId);
+  if (!meet) return 0;
+  const events = await repo.eventsOfMeet(m, meetId);
+  const all = await repo.resultsOfEvents(m, events.map((e) => e.id));
+  if (all.length === 0) return 0;
+  const before = new Map(all.map((r) => [r.id, { ...r }]));
+  const perEvent = groupBy(all, (r) => r.meetEventId);
+  for (const event of events) rank(meet, event, perEvent.get(event.id) ?? []);
+  const dirty = all.filter((r) => moved(before.get(r.id)!, r));
+  await repo.upsert(m, dirty);
+  await repo.replaceStandings(m, meetId, standings(meetId, await repo.standingInputs(m, meetId)));
+  const audit: WriteOptions = { userId: options.userId, action: 'CORRECTED', reason: `Scoring changed: ${options.reason}` };
+  await repo.audit(m, dirty.map((r) => auditRow(r, auditView(before.get(r.id)!), audit)));
+  return dirty.length;
+}
+
 function newResult(meet: MeetEntity, event: MeetEventEntity, entry: ResultChange['entry']): ResultEntity {
   return Object.assign(new ResultEntity(), {
     id: randomUUID(), entryId: entry.id, meetEventId: event.id, meetId: meet.id, seasonId: meet.seasonId, clubId: entry.clubId,

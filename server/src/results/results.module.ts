@@ -5,6 +5,7 @@ import { MeetsModule } from '../meets/meets.module.js';
 import { ResultsExportController } from './export/results-export.controller.js';
 import { ResultsImportController } from './import/results-import.controller.js';
 import { ResultsImportService } from './import/results-import.service.js';
+import { MeetRescorer } from './meet-rescorer.js';
 import { PublishService } from './publish.service.js';
 import { ResultHydrator } from './result-hydrator.js';
 import { ResultsBrowseService } from './results-browse.service.js';
@@ -21,7 +22,7 @@ import { StandingsService } from './standings.service.js';
   imports: [LeagueModule, MeetsModule],
   providers: [
     ResultsRepository, ResultsReadRepository, ResultsExplorerRepository, ResultsWriter, ResultHydrator,
-    ResultsService, StandingsService, ResultsBrowseService, PublishService, ResultsImportService, ResultsResolver, StandingsResolver,
+    ResultsService, StandingsService, ResultsBrowseService, PublishService, ResultsImportService, ResultsResolver, StandingsResolver, MeetRescorer,
   ],
   controllers: [ResultsImportController, ResultsExportController],
 })

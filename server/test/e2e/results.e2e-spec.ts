@@ -4,9 +4,9 @@ import type { INestApplication } from '@nestjs/common';
 import { errorCode } from '../utils/graphql.js';
 import { waitForMail } from '../utils/mail-sink.js';
 import { addAxe, axeInput, logService, updateAxe } from '../utils/rack-operations.js';
-import { lookupIds, type Ids } from '../utils/meet-operations.js';
+import { lookupIds, meetInput, type Ids } from '../utils/meet-operations.js';
 import {
-  axeResults, correctResult, importSheet, meetResults, meetStandings, publishMeetResults, recordResult, resultAudit, resultsMeet, seasonStandings,
+  axeResults, correctResult, importSheet, meetChanges, updateMeet, meetResults, meetStandings, publishMeetResults, recordResult, resultAudit, resultsMeet, seasonStandings,
   resultsActors, type ResultsActors,
 } from '../utils/results-operations.js';
 import { createTestApp } from '../utils/test-app.js';
@@ -171,6 +171,32 @@ describe('posting, ranking, correcting and publishing results (real MariaDB)', (
     expect(errorCode(await axeResults(app, added.id))).toBe('NOT_FOUND');
     expect((await updateAxe(app, tokens.coach, added.id, axeInput({ label: added.label, grind: 'CONVEX', bevelIncludedDeg: 34, chiselWidthMm: null, isPublic: true }))).errors).toBeUndefined();
     expect((await axeResults(app, added.id)).data!.axeResults).toHaveLength(1);
+  });
+
+  it("re-ranks a published meet when its scoring changes, only with a reason, and keeps the change on record", async () => {
+    const { meetId, name, athletes } = await resultsMeet(app, ids, tokens);
+    for (const [i, x] of athletes.entries()) await recordResult(app, tokens.organiser, { entryId: x.entryId, status: 'FINISHED', times: [`${40 + i}.00`] });
+    await publishMeetResults(app, tokens.organiser, meetId);
+    const totals = async () => Object.fromEntries((await meetStandings(app, meetId)).data!.meetStandings.divisions[0]!.clubs.map((c) => [c.clubId, c.points]));
+    // Hand-worked on 7-6-5-4-3-2-1: Larchmere ran 1st to 3rd (7 + 6 + 5 = 18), Cedar Fork 4th and 5th (4 + 3 = 7).
+    expect(await totals()).toEqual({ [ids.clubs.LARCH]: 18, [ids.clubs.CFORK]: 7 });
+
+    const input = meetInput(ids, { name, pointsTable: [5, 4, 3, 2, 1, 0] });
+    const refused = await updateMeet(app, tokens.organiser, meetId, input);
+    expect(refused.errors?.[0]?.extensions).toMatchObject({ code: 'BAD_USER_INPUT', field: 'reason' });
+    expect(await totals()).toEqual({ [ids.clubs.LARCH]: 18, [ids.clubs.CFORK]: 7 });
+
+    expect((await updateMeet(app, tokens.organiser, meetId, { ...input, reason: 'sanctioning table for this season' })).errors).toBeUndefined();
+    // On 5-4-3-2-1-0: Larchmere 5 + 4 + 3 = 12, Cedar Fork 2 + 1 = 3.
+    expect(await totals()).toEqual({ [ids.clubs.LARCH]: 12, [ids.clubs.CFORK]: 3 });
+    const page = (await meetResults(app, meetId)).data!.meetResults.events[0]!.results;
+    expect(page.map((r) => r.points)).toEqual([5, 4, 3, 2, 1]);
+    const changes = (await meetChanges(app, tokens.organiser, meetId)).data!.meetChanges;
+    expect(changes[0]).toMatchObject({ summary: 'Scoring changed: sanctioning table for this season', byName: 'Meet Organiser (demo)' });
+    expect(JSON.parse(changes[0]!.before)).toMatchObject({ pointsTable: [7, 6, 5, 4, 3, 2, 1] });
+    const audit = (await resultAudit(app, tokens.organiser, meetId)).data!.resultAudit.filter((a) => a.reason === 'Scoring changed: sanctioning table for this season');
+    expect(audit).toHaveLength(5);
+    expect(errorCode(await meetChanges(app, tokens.coach, meetId))).toBe('FORBIDDEN');
   });
 
   it('states the season tie-break', async () => {

@@ -84,6 +84,15 @@ export function axeResults(app: INestApplication, axeId: string, token?: string)
   return gql<{ axeResults: (ResultShape & { meetId: string })[] }>(app, `query($a: ID!) { axeResults(axeId: $a) { meetId ${RESULT} } }`, { a: axeId }, { token });
 }
 
+export function updateMeet(app: INestApplication, token: string, id: string, input: Record<string, unknown>) {
+  return gql<{ updateMeet: { id: string } }>(app, 'mutation($id: ID!, $i: MeetInput!) { updateMeet(id: $id, input: $i) { id } }', { id, i: input }, { token });
+}
+
+export function meetChanges(app: INestApplication, token: string, meetId: string) {
+  return gql<{ meetChanges: { summary: string; byName: string | null; before: string; after: string }[] }>(
+    app, 'query($m: ID!) { meetChanges(meetId: $m) { summary byName before after } }', { m: meetId }, { token });
+}
+
 export function resultAudit(app: INestApplication, token: string | undefined, meetId: string) {
   return gql<{ resultAudit: { action: string; reason: string | null; byName: string | null; before: string | null; after: string }[] }>(
     app, 'query($m: ID!) { resultAudit(meetId: $m) { action reason byName before after } }', { m: meetId }, { token });

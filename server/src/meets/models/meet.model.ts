@@ -201,6 +201,9 @@ export class MeetChangeModel {
   @Field(() => String, { nullable: true })
   byUserId: string | null;
 
+  @Field(() => String, { nullable: true, description: 'Who made the change, when the account still exists' })
+  byName: string | null;
+
   @Field(() => Date)
   at: Date;
 

@@ -2,6 +2,7 @@ import { gql, type TypedDocumentNode } from '@apollo/client';
 
 import type {
   ClubOption,
+  MeetChange,
   ClubRoster,
   Entry,
   EventType,
@@ -225,7 +226,21 @@ const withdrawEntry: TypedDocumentNode<{ withdrawEntry: boolean }, { entryId: st
   }
 `;
 
+const meetChanges: TypedDocumentNode<{ meetChanges: MeetChange[] }, { meetId: string }> = gql`
+  query MeetChanges($meetId: ID!) {
+    meetChanges(meetId: $meetId) {
+      id
+      summary
+      byName
+      at
+      before
+      after
+    }
+  }
+`;
+
 export const meetsDocuments = {
+  meetChanges,
   meets,
   leagueOptions,
   eventTypes,

@@ -159,3 +159,14 @@ export interface ClubRoster {
 
 /** The signed-in member's unit preference (METRIC when signed out). */
 export type UnitPreference = 'METRIC' | 'IMPERIAL';
+
+/** A recorded change to a meet after results were in; before and after are JSON of the scoring. */
+export interface MeetChange {
+  __typename?: 'MeetChange';
+  id: string;
+  summary: string;
+  byName: string | null;
+  at: string;
+  before: string;
+  after: string;
+}

@@ -23,6 +23,7 @@ import { EnterHint } from './enter-hint.js';
 import { EntryPickerDialog } from './entry-picker-dialog.js';
 import { EventFormDialog } from './event-form-dialog.js';
 import { LineupLinks } from './lineup-links.js';
+import { MeetChanges } from './meet-changes.js';
 import { ResultsLinks } from './results-links.js';
 import { MeetDaySafety } from './meet-day-safety.js';
 import type { MeetPageState } from './meet-builder.js';
@@ -30,6 +31,9 @@ import { MeetEventCard } from './meet-event-card.js';
 import { MeetHeader } from './meet-header.js';
 import { MeetOrganiserBar } from './meet-organiser-bar.js';
 import { MeetScoringSummary } from './meet-scoring.js';
+
+/** Statuses in which a meet has results, so its scoring changes are on record. */
+const HAS_RESULTS = ['RUNNING', 'PUBLISHED', 'ARCHIVED'];
 
 type OpenDialog =
   | { kind: 'event'; event?: MeetEvent }
@@ -123,6 +127,7 @@ export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
         <Stack spacing={3}>
           <MeetDaySafety />
           <MeetScoringSummary meet={meet} />
+          {meet.canManage && HAS_RESULTS.includes(meet.status) && <MeetChanges meetId={meet.id} meet={meet} />}
         </Stack>
       </Box>
 

@@ -27,7 +27,7 @@ async function openAspenChisel(page: Page, shot: string, violations: string[]) {
   await pick(page, 'Species', 'Quaking aspen');
   await page.waitForURL(/species=quaking-aspen/);
   // The address changes first; the map re-renders just after it.
-  await expect(settled(() => table.getByRole('rowheader').allTextContents(), ['quaking aspen'])).resolves.toEqual(['quaking aspen']);
+  await expect(settled(() => table.getByRole('rowheader').allTextContents(), ['Quaking aspen'])).resolves.toEqual(['Quaking aspen']);
   violations.push(...(await seriousViolations(page)).map((v) => `${shot} map: ${v}`));
   await screenshot(page, `${shot}-map`);
 

@@ -5,6 +5,7 @@ import TextField from '@mui/material/TextField';
 
 import type { GrainOptions } from '../api/types.js';
 import type { GrainUrlFilter } from '../lib/use-grain-filter.js';
+import { sentenceCase } from '../../../lib/sentence-case.js';
 
 const CONDITIONS = ['green', 'seasoned', 'dry', 'punky', 'frozen', 'knotty'];
 const DIVISIONS = [['MENS', "Men's"], ['WOMENS', "Women's"], ['MIXED', 'Mixed']] as const;
@@ -39,7 +40,7 @@ export function GrainFilters({ filter, onChange, options, species = [] }: GrainF
       </TextField>
       <TextField select label="Species" value={species.some((s) => s.speciesId === filter.species) ? filter.species : ''} onChange={(e) => onChange({ species: e.target.value, cell: '' })} slotProps={slots}>
         <MenuItem value="">All species</MenuItem>
-        {species.map((s) => <MenuItem key={s.speciesId} value={s.speciesId}>{s.name}</MenuItem>)}
+        {species.map((s) => <MenuItem key={s.speciesId} value={s.speciesId}>{sentenceCase(s.name)}</MenuItem>)}
       </TextField>
       <TextField select label="Block condition" value={filter.condition} onChange={(e) => onChange({ condition: e.target.value })} slotProps={slots}>
         <MenuItem value="">Any condition</MenuItem>

@@ -14,6 +14,7 @@ import { CellDetail } from './cell-detail.js';
 import { GrainFilters } from './grain-filters.js';
 import { GrainMatrixTable } from './grain-matrix-table.js';
 import { MethodNote } from './method-note.js';
+import { sentenceCase } from '../../../lib/sentence-case.js';
 
 /** The map for the chosen filters, a sentence per wood, the method and the CSV export. */
 export function GrainMapView({ options, imperial }: { options: GrainOptions; imperial: boolean }) {
@@ -54,7 +55,7 @@ export function GrainMapView({ options, imperial }: { options: GrainOptions; imp
                 <Typography>{s.sentence}</Typography>
                 {s.source && (
                   <Typography variant="caption" color="text.secondary" sx={{ display: "block" }}>
-                    {s.name}: specific gravity {s.specificGravityGreen ?? '—'} green, {s.specificGravityDry ?? '—'} at 12 %; side hardness {s.hardnessLbfGreen ?? 'not published'} lbf green, {s.hardnessLbfDry ?? 'not published'} lbf at 12 %. Source: {s.source}.
+                    {sentenceCase(s.name)}: specific gravity {s.specificGravityGreen ?? '—'} green, {s.specificGravityDry ?? '—'} at 12 %; side hardness {s.hardnessLbfGreen ?? 'not published'} lbf green, {s.hardnessLbfDry ?? 'not published'} lbf at 12 %. Source: {s.source}.
                   </Typography>
                 )}
               </Paper>
@@ -65,7 +66,7 @@ export function GrainMapView({ options, imperial }: { options: GrainOptions; imp
         </>
       )}
       {openSpecies && openGrind && (
-        <CellDetail filter={variables} speciesId={openSpecies} grind={openGrind} imperial={imperial} speciesName={map?.species.find((s) => s.speciesId === openSpecies)?.name ?? openSpecies} onClose={() => setFilter({ cell: '' })} />
+        <CellDetail filter={variables} speciesId={openSpecies} grind={openGrind} imperial={imperial} speciesName={sentenceCase(map?.species.find((s) => s.speciesId === openSpecies)?.name ?? openSpecies)} onClose={() => setFilter({ cell: '' })} />
       )}
     </Stack>
   );

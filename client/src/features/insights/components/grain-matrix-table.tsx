@@ -9,6 +9,7 @@ import Typography from '@mui/material/Typography';
 
 import type { GrainMap } from '../api/types.js';
 import { effectColour, effectTextColour, effectWords } from '../lib/effect-colour.js';
+import { sentenceCase } from '../../../lib/sentence-case.js';
 
 export const LABEL_WORDS = { strong: 'strong', suggestive: 'suggestive', 'not-enough-data': 'not enough data' } as const;
 
@@ -31,7 +32,7 @@ export function GrainMatrixTable({ map, onOpen }: GrainMatrixTableProps) {
         <TableBody>
           {map.species.map((s) => (
             <TableRow key={s.speciesId}>
-              <TableCell component="th" scope="row">{s.name}</TableCell>
+              <TableCell component="th" scope="row">{sentenceCase(s.name)}</TableCell>
               {map.grinds.map((grind) => {
                 const cells = map.cells.filter((c) => c.speciesId === s.speciesId && c.grind === grind);
                 if (cells.length === 0) {
@@ -48,7 +49,7 @@ export function GrainMatrixTable({ map, onOpen }: GrainMatrixTableProps) {
                   <TableCell key={grind} align="center" sx={{ p: 0.5 }}>
                     <ButtonBase
                       onClick={() => onOpen(s.speciesId, grind)}
-                      aria-label={`${s.name}, ${grind}: ${words}, n = ${cell.results}, ${LABEL_WORDS[cell.label]}`}
+                      aria-label={`${sentenceCase(s.name)}, ${grind}: ${words}, n = ${cell.results}, ${LABEL_WORDS[cell.label]}`}
                       sx={{ display: 'block', width: '100%', minHeight: 56, borderRadius: 1, p: 1, bgcolor: effectColour(shown), color: effectTextColour(shown), border: 1, borderColor: 'divider', borderStyle: cell.label === 'strong' ? 'solid' : 'dashed' }}
                     >
                       <Typography variant="body2" sx={{ fontWeight: 600 }}>{words}</Typography>

@@ -4,7 +4,8 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { Browser } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
-import { DEMO_PASSWORD, signInThroughForm } from './support/accounts';
+import { api as callApi, demoToken } from './support/api';
+import { signInThroughForm } from './support/accounts';
 import { BASE_URL, DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
 
 // Demo accounts come from the seed (seeds/src/demo-league.ts).
@@ -13,19 +14,9 @@ const ADMIN = 'admin@example.org';
 const ATHLETE = 'athlete@example.org';
 const NOTE = 'id slug title';
 
-async function api<T>(query: string, variables: Record<string, unknown>, token?: string): Promise<T> {
-  const res = await fetch(`${BASE_URL}/graphql`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', 'x-forwarded-for': `10.78.${process.pid % 250}.7`, ...(token ? { authorization: `Bearer ${token}` } : {}) },
-    body: JSON.stringify({ query, variables }),
-  });
-  const body = (await res.json()) as { data?: T; errors?: { message: string }[] };
-  if (!body.data || body.errors) throw new Error(JSON.stringify(body.errors));
-  return body.data;
-}
-
-const token = async (email: string) =>
-  (await api<{ signIn: { accessToken: string } }>('mutation($i: SignInInput!) { signIn(input: $i) { accessToken } }', { i: { email, password: DEMO_PASSWORD } })).signIn.accessToken;
+const ADDRESS = `10.78.${process.pid % 250}.7`;
+const api = <T>(query: string, variables: Record<string, unknown>, token?: string) => callApi<T>(query, variables, token, ADDRESS);
+const token = (email: string) => demoToken(email, ADDRESS);
 
 /** A word no other note holds (letters only), so searches find this run's notes. */
 const marker = (label: string) => `${label}${Date.now().toString(36).replace(/\d/g, (d) => 'qwertyuiop'[Number(d)]!)}`;

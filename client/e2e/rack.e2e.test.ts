@@ -5,27 +5,17 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { Browser } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
-import { DEMO_PASSWORD, signInThroughForm } from './support/accounts';
-import { BASE_URL, DESKTOP, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { api as callApi, demoToken } from './support/api';
+import { signInThroughForm } from './support/accounts';
+import { DESKTOP, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
 
 // Demo accounts come from the seed (seeds/src/demo-league.ts).
 const COACH = 'coach@example.org';
 const ORGANISER = 'organiser@example.org';
 
-/** One GraphQL call from the test itself (setting up the meet), from its own fake address. */
-async function api<T>(query: string, variables: Record<string, unknown>, token?: string): Promise<T> {
-  const res = await fetch(`${BASE_URL}/graphql`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', 'x-forwarded-for': `10.77.${process.pid % 250}.9`, ...(token ? { authorization: `Bearer ${token}` } : {}) },
-    body: JSON.stringify({ query, variables }),
-  });
-  const body = (await res.json()) as { data?: T; errors?: { message: string }[] };
-  if (!body.data || body.errors) throw new Error(JSON.stringify(body.errors));
-  return body.data;
-}
-
-const token = async (email: string) =>
-  (await api<{ signIn: { accessToken: string } }>('mutation($i: SignInInput!) { signIn(input: $i) { accessToken } }', { i: { email, password: DEMO_PASSWORD } })).signIn.accessToken;
+const ADDRESS = `10.77.${process.pid % 250}.9`;
+const api = <T>(query: string, variables: Record<string, unknown>, token?: string) => callApi<T>(query, variables, token, ADDRESS);
+const token = (email: string) => demoToken(email, ADDRESS);
 
 /** A small, real PNG (one colour), so the browser can show it after the upload. */
 function png(width: number, height: number): Buffer {

@@ -4,22 +4,13 @@ import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
 import type { Browser, Page } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
+import { api } from './support/api';
 import { DEMO_PASSWORD, signInThroughForm } from './support/accounts';
-import { BASE_URL, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
 
 // The Larchmere coach comes from the seed (seeds/src/demo-league.ts); the axes are made fresh here.
 const COACH = 'coach@example.org';
 
-async function api<T>(query: string, variables: Record<string, unknown>, token?: string): Promise<T> {
-  const res = await fetch(`${BASE_URL}/graphql`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json', ...(token ? { authorization: `Bearer ${token}` } : {}) },
-    body: JSON.stringify({ query, variables }),
-  });
-  const body = (await res.json()) as { data?: T; errors?: { message: string }[] };
-  if (!body.data) throw new Error(JSON.stringify(body.errors));
-  return body.data;
-}
 
 /** Three fresh axes in the coach's rack: a flat reference, a chisel and a convex head. */
 async function freshAxes(): Promise<{ ref: string; chisel: string; convex: string }> {

@@ -1,4 +1,4 @@
-import { formatLength, formatTime } from '@endgrain/shared';
+import { DIVISION_LABELS, formatLength, formatTime, type Division } from '@endgrain/shared';
 import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Chip from '@mui/material/Chip';
@@ -53,7 +53,7 @@ export function HandicapSheetView({ sheet, imperial, saving, onSave }: HandicapS
   return (
     <Stack spacing={2}>
       <GlobalStyles styles={PRINT} />
-      <Typography>{sheet.eventName}, {sheet.division.toLowerCase()} · block {block} · {sheet.convention}</Typography>
+      <Typography>{sheet.eventName}, {DIVISION_LABELS[sheet.division as Division] ?? sheet.division} · block {block} · {sheet.convention}</Typography>
       <Typography variant="body2" color="text.secondary">{sheet.note}</Typography>
       <Box sx={STACKED}>
         <Table size="small" aria-label="Handicap marks">
@@ -100,7 +100,7 @@ function MarkRow({ mark, imperial, value, error, onChange }: MarkRowProps) {
     <TableRow>
       <TableCell component="th" scope="row">
         {mark.athleteName}
-        {mark.flags.map((f) => <Chip key={f} size="small" color="warning" variant="outlined" label={FLAG_WORDS[f] ?? f} sx={{ ml: 1 }} />)}
+        {mark.flags.map((f) => <Chip key={f} size="small" color="warning" label={FLAG_WORDS[f] ?? f} sx={{ ml: 1 }} />)}
       </TableCell>
       <TableCell><Box component="span" sx={phoneOnly}>Expected time </Box>{mark.expectedHundredths === null ? 'no past times' : formatTime(Math.round(mark.expectedHundredths))}</TableCell>
       <TableCell>

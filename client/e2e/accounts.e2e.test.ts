@@ -1,28 +1,18 @@
-import { mkdirSync } from 'node:fs';
-
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
 
 import { seriousViolations } from './support/a11y';
 import { freshEmail } from './support/accounts';
-import { DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { DESKTOP, PHONE, openSession, screenshot, useChromium } from './support/browser';
 import { firstLink, waitForMail } from './support/mail';
 
 const PASSWORD = 'springboard above the pocket';
 
 describe('a newcomer signs up in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('signs up, confirms the e-mail from the mail sink, signs in and sees the account page', async () => {
     const email = freshEmail('browser');
-    const { page, context, errors } = await openSession(browser, PHONE);
+    const { page, context, errors } = await openSession(browser(), PHONE);
     const violations: string[] = [];
 
     await page.goto('/sign-up');
@@ -37,7 +27,7 @@ describe('a newcomer signs up in Chromium', () => {
     // Open the link from the real e-mail in a fresh, signed-out profile.
     const link = firstLink(await waitForMail(email, /confirm your e-mail/i));
     await context.close();
-    const second = await openSession(browser, PHONE);
+    const second = await openSession(browser(), PHONE);
     await second.page.goto(link);
     await second.page.getByText(`${email} is confirmed`).waitFor();
     violations.push(...(await seriousViolations(second.page)).map((v) => `verify: ${v}`));
@@ -64,7 +54,7 @@ describe('a newcomer signs up in Chromium', () => {
   });
 
   it('shows the same error for a wrong password as for an unknown address', async () => {
-    const { page, context } = await openSession(browser, DESKTOP);
+    const { page, context } = await openSession(browser(), DESKTOP);
     await page.goto('/sign-in');
     await page.getByLabel('Email').fill('coach@example.org');
     await page.getByLabel('Password', { exact: true }).fill('certainly not it');

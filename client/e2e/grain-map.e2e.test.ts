@@ -1,11 +1,9 @@
-import { mkdirSync } from 'node:fs';
-
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
+import type { Page } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
 import { signInThroughForm } from './support/accounts';
-import { DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot, settled } from './support/browser';
+import { DESKTOP, PHONE, openSession, screenshot, settled, useChromium } from './support/browser';
 
 // The Larchmere coach comes from the seed (seeds/src/demo-league.ts); the past seasons of men's
 // underhand results on quaking aspen come from the seed step's seedHistory (server/src/insights/seed-history.ts).
@@ -48,17 +46,10 @@ async function openAspenChisel(page: Page, shot: string, violations: string[]) {
 }
 
 describe('a coach reads the Grain Map in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('filters to one species on a phone, opens a cell and sees the results behind it', async () => {
-    const { page, context, errors } = await openSession(browser, PHONE);
+    const { page, context, errors } = await openSession(browser(), PHONE);
     const violations: string[] = [];
     const { dialog } = await openAspenChisel(page, 'grain-map-phone', violations);
     // The athlete's time comes right after the name so it fits on a phone; times print as (m:)ss.hh.
@@ -73,7 +64,7 @@ describe('a coach reads the Grain Map in Chromium', () => {
   });
 
   it('shows the same cell on a desktop with every result listed', async () => {
-    const { page, context, errors } = await openSession(browser, DESKTOP);
+    const { page, context, errors } = await openSession(browser(), DESKTOP);
     const violations: string[] = [];
     const { dialog, n } = await openAspenChisel(page, 'grain-map-desktop', violations);
     // The seed's aspen results all come from its invented "Aspen Days" season.

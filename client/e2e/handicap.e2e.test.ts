@@ -1,11 +1,8 @@
-import { mkdirSync } from 'node:fs';
-
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
 
 import { seriousViolations } from './support/a11y';
 import { signInThroughForm } from './support/accounts';
-import { PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { PHONE, openSession, screenshot, useChromium } from './support/browser';
 
 // The demo organiser and the open "Cedar Fork Frost Chop" with its women's underhand entries come
 // from the seed (seeds/src/demo-meets.ts); the mark typed here is taken back at the end.
@@ -13,17 +10,10 @@ const ORGANISER = 'organiser@example.org';
 const MEET = 'Cedar Fork Frost Chop';
 
 describe('an organiser sets handicap marks in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('opens the marks from the meet page on a phone, overrides one, saves it and finds it again', async () => {
-    const { page, context, errors } = await openSession(browser, PHONE);
+    const { page, context, errors } = await openSession(browser(), PHONE);
     const violations: string[] = [];
     await signInThroughForm(page, ORGANISER);
     await page.goto('/meets');

@@ -1,11 +1,9 @@
-import { mkdirSync } from 'node:fs';
-
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
+import type { Page } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
 import { signInThroughForm } from './support/accounts';
-import { DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { DESKTOP, PHONE, openSession, screenshot, useChromium } from './support/browser';
 
 // Demo accounts and the Larchmere roster come from the seed (seeds/src/demo-league.ts).
 const ORGANISER = 'organiser@example.org';
@@ -36,21 +34,14 @@ async function addEvent(page: Page, event: string, division: string, diameter?: 
 }
 
 describe('a meet is built, opened and entered in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('an organiser builds a meet with two events, a coach enters athletes, and the meet page shows the entries', async () => {
     const name = `Browser Thaw Chop ${Date.now().toString(36)}`;
     const violations: string[] = [];
 
     // The organiser, on a laptop, builds the meet.
-    const organiser = await openSession(browser, DESKTOP);
+    const organiser = await openSession(browser(), DESKTOP);
     await signInThroughForm(organiser.page, ORGANISER);
     await organiser.page.goto('/meets');
     await organiser.page.getByRole('link', { name: 'New meet' }).first().click();
@@ -81,7 +72,7 @@ describe('a meet is built, opened and entered in Chromium', () => {
     await screenshot(organiser.page, 'meets-built-desktop');
 
     // The coach, on a phone, enters one athlete in the chop and a pair in the double buck.
-    const coach = await openSession(browser, PHONE);
+    const coach = await openSession(browser(), PHONE);
     await signInThroughForm(coach.page, COACH);
     await coach.page.goto(meetUrl);
     await coach.page.getByRole('heading', { name, level: 1 }).waitFor();

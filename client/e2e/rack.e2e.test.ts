@@ -1,13 +1,11 @@
-import { mkdirSync } from 'node:fs';
 import { deflateSync, crc32 } from 'node:zlib';
 
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
 
 import { seriousViolations } from './support/a11y';
 import { api as callApi, demoToken } from './support/api';
 import { signInThroughForm } from './support/accounts';
-import { DESKTOP, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { DESKTOP, openSession, screenshot, useChromium } from './support/browser';
 
 // Demo accounts come from the seed (seeds/src/demo-league.ts).
 const COACH = 'coach@example.org';
@@ -64,21 +62,14 @@ async function meetWithRookie(label: string) {
 }
 
 describe('the rack in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('a coach adds an axe with a photo, logs a regrind, assigns it in a lineup and sees the warning for a rookie', async () => {
     const label = Date.now().toString(36).slice(-6);
     const axeLabel = `Race ${label}`;
     const { meetId, clubId, rookie } = await meetWithRookie(label);
     const violations: string[] = [];
-    const coach = await openSession(browser, DESKTOP);
+    const coach = await openSession(browser(), DESKTOP);
     const { page } = coach;
     page.setDefaultTimeout(15_000);
     await signInThroughForm(page, COACH);

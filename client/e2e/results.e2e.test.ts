@@ -1,12 +1,9 @@
-import { mkdirSync } from 'node:fs';
-
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
 
 import { seriousViolations } from './support/a11y';
 import { api as callApi, demoToken } from './support/api';
 import { signInThroughForm } from './support/accounts';
-import { DESKTOP, PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { DESKTOP, PHONE, openSession, screenshot, useChromium } from './support/browser';
 
 // Demo accounts come from the seed (seeds/src/demo-league.ts).
 const ORGANISER = 'organiser@example.org';
@@ -50,19 +47,12 @@ const sheet = (athletes: { name: string; club: string }[], times: string[]) =>
   ['Event,Division,Club,Athletes,Time,Grind,Bevel angle,Condition', ...athletes.map((a, i) => `Underhand chop,Men's,${a.club},${a.name},${times[i]},convex,30,seasoned`)].join('\r\n');
 
 describe('results in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('an organiser uploads a sheet, sees its row errors, fixes it, saves, publishes; a visitor then reads the standings', async () => {
     const stamp = `${Date.now().toString(36)}${process.pid}`;
     const meet = await closedMeet(stamp);
-    const { page, context, errors } = await openSession(browser, DESKTOP);
+    const { page, context, errors } = await openSession(browser(), DESKTOP);
     const violations: string[] = [];
     await signInThroughForm(page, ORGANISER);
 
@@ -93,7 +83,7 @@ describe('results in Chromium', () => {
     await expect(results.getByRole('row').nth(1).textContent()).resolves.toMatch(new RegExp(`^1${meet.athletes[0]!.name}.*41\\.37.*7`));
     await context.close();
 
-    const visitor = await openSession(browser, PHONE);
+    const visitor = await openSession(browser(), PHONE);
     await visitor.page.goto('/standings');
     await visitor.page.getByRole('heading', { name: 'Standings' }).waitFor();
     await visitor.page.getByRole('table', { name: "Men's standings" }).waitFor();

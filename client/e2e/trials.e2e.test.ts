@@ -1,16 +1,13 @@
-import { mkdirSync } from 'node:fs';
-
-import { afterAll, beforeAll, describe, expect, it } from '@jest/globals';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from '@jest/globals';
+import type { Page } from 'playwright-core';
 
 import { seriousViolations } from './support/a11y';
 import { api } from './support/api';
 import { DEMO_PASSWORD, signInThroughForm } from './support/accounts';
-import { PHONE, SHOT_DIR, launchBrowser, openSession, screenshot } from './support/browser';
+import { PHONE, openSession, screenshot, useChromium } from './support/browser';
 
 // The Larchmere coach comes from the seed (seeds/src/demo-league.ts); the axes are made fresh here.
 const COACH = 'coach@example.org';
-
 
 /** Three fresh axes in the coach's rack: a flat reference, a chisel and a convex head. */
 async function freshAxes(): Promise<{ ref: string; chisel: string; convex: string }> {
@@ -55,18 +52,11 @@ async function recordAxe(page: Page, axe: string | null, depths: string[], relea
 }
 
 describe('a coach records a trial beside the block in Chromium', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    mkdirSync(SHOT_DIR, { recursive: true });
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser.close();
-  });
+  const browser = useChromium();
 
   it('records three axes on a phone, keeps the last one through a lost connection, and sees the ranking', async () => {
     const axes = await freshAxes();
-    const { page, context, errors } = await openSession(browser, PHONE);
+    const { page, context, errors } = await openSession(browser(), PHONE);
     const violations: string[] = [];
     await signInThroughForm(page, COACH);
 

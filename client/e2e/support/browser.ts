@@ -1,3 +1,6 @@
+import { mkdirSync } from 'node:fs';
+
+import { afterAll, beforeAll } from '@jest/globals';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 
 export const BASE_URL = process.env.PUBLIC_URL ?? 'http://127.0.0.1:3010';
@@ -56,4 +59,20 @@ export async function settled<T>(read: () => Promise<T>, expected: T, timeoutMs 
     value = await read();
   }
   return value;
+}
+
+/** One Chromium for a describe block: launched before its tests (with the shot folder made), closed after. */
+export function useChromium(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    mkdirSync(SHOT_DIR, { recursive: true });
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('Chromium is not running yet: call the getter inside a test.');
+    return browser;
+  };
 }

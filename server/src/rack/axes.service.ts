@@ -17,6 +17,7 @@ import { PhotoUrlSigner } from './photos/photo-url-signer.js';
 import { assertCanEditAxe, canSeeAxe } from './rack-access.js';
 import { toAxeModel, toPhotoModel, toServiceModel } from './rack.mappers.js';
 import { RackRepository } from './rack.repository.js';
+import { PhotosService } from './photos/photos.service.js';
 
 @Injectable()
 export class AxesService {
@@ -25,6 +26,7 @@ export class AxesService {
     @Inject(PhotoUrlSigner) private readonly signer: PhotoUrlSigner,
     @Inject(SearchOutboxRepository) private readonly outbox: SearchOutboxRepository,
     @Inject(SearchIndexer) private readonly indexer: SearchIndexer,
+    @Inject(PhotosService) private readonly photos: PhotosService,
   ) {}
 
   /** Queues the axe for the search index (added, removed or changed when it is public or goes private). */
@@ -94,6 +96,29 @@ export class AxesService {
     });
     await this.reindex(id);
     return this.detail(actor, id, now);
+  }
+
+  /**
+   * Deletes an axe added by mistake, with its service log and photos. An axe with results,
+   * trials or lineup places on record is retired instead, so that history keeps its axe.
+   */
+  async remove(actor: AuthUser, id: string): Promise<boolean> {
+    const axe = await this.mustFind(id);
+    assertCanEditAxe(actor, axe);
+    const used = await this.repo.axeUsage(id);
+    const uses = [
+      used.results ? `${used.results} ${used.results === 1 ? 'result' : 'results'}` : null,
+      used.trials ? `${used.trials} ${used.trials === 1 ? 'trial' : 'trials'}` : null,
+      used.lineups ? `${used.lineups} lineup ${used.lineups === 1 ? 'place' : 'places'}` : null,
+    ].filter(Boolean);
+    if (uses.length > 0) {
+      throw DomainError.badInput('id', `${axe.label} is on record in ${uses.join(', ')}. Set its status to retired instead, so that history keeps its axe.`);
+    }
+    const photos = await this.repo.photos().find({ where: { axeId: id }, select: { id: true, fileName: true } });
+    await this.repo.axes().delete({ id });
+    await this.photos.removeFiles(photos.map((p) => p.fileName));
+    await this.reindex(id);
+    return true;
   }
 
   async mustFind(id: string): Promise<AxeEntity> {

@@ -165,4 +165,15 @@ export class RackRepository {
   findOverrides(ids: string[]): Promise<LineupOverrideEntity[]> {
     return ids.length ? this.overrides().findBy({ id: In(ids) }) : Promise.resolve([]);
   }
+
+  /** How often an axe is on record elsewhere: results, trials (as tested or reference axe) and lineups. */
+  async axeUsage(axeId: string): Promise<{ results: number; trials: number; lineups: number }> {
+    const [row] = await this.db.query<{ results: string; trials: string; lineups: string }[]>(
+      `SELECT (SELECT COUNT(*) FROM results WHERE axe_id = ?) AS results,
+              (SELECT COUNT(*) FROM trial_runs WHERE axe_id = ?) + (SELECT COUNT(*) FROM trials WHERE reference_axe_id = ?) AS trials,
+              (SELECT COUNT(*) FROM lineup_assignments WHERE axe_id = ?) AS lineups`,
+      [axeId, axeId, axeId, axeId],
+    );
+    return { results: Number(row?.results ?? 0), trials: Number(row?.trials ?? 0), lineups: Number(row?.lineups ?? 0) };
+  }
 }

@@ -48,6 +48,12 @@ export class RackResolver {
     return this.axes.update(actor, id, input);
   }
 
+  @Mutation(() => Boolean, { description: 'Delete an axe added by mistake; one with results, trials or lineup places is retired instead' })
+  @Roles('COACH')
+  deleteAxe(@CurrentUser() actor: AuthUser, @Args('id', { type: () => ID }) id: string): Promise<boolean> {
+    return this.axes.remove(actor, id);
+  }
+
   @Mutation(() => AxeDetailModel, { description: 'Log work on an axe; any setup it changed becomes the current setup' })
   @Roles('COACH')
   logAxeService(@CurrentUser() actor: AuthUser, @Args('input') input: AxeServiceInput): Promise<AxeDetailModel> {

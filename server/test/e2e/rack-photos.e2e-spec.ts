@@ -1,6 +1,7 @@
 import { describe, expect, it } from '@jest/globals';
 
-import { addAxe, axe, axeInput, fetchPhoto, pngImage, realJpegWithMetadata, removeAxePhoto, uploadPhoto, useRackApp } from '../utils/rack-operations.js';
+import { errorCode } from '../utils/graphql.js';
+import { addAxe, axe, axeInput, deleteAxe, fetchPhoto, pngImage, realJpegWithMetadata, removeAxePhoto, rack, uploadPhoto, useRackApp } from '../utils/rack-operations.js';
 
 const LIMIT = 8 * 1024 * 1024; // the product's stated photo limit: 8 MiB
 
@@ -95,4 +96,21 @@ describe('axe photos over REST (real MariaDB, real upload folder)', () => {
     expect((await removeAxePhoto(ctx.app, ctx.coach, photo.id)).data?.removeAxePhoto).toBe(true);
     expect((await fetchPhoto(ctx.app, photo.url)).status).toBe(404);
   });
+
+  it('deletes an axe added by mistake with its photos, and sends one with history to retirement instead', async () => {
+    const a = await newAxe();
+    const photo = (await uploadPhoto(ctx.app, ctx.coach, a.id, pngImage(8, 8))).body as { url: string };
+    expect(errorCode(await deleteAxe(ctx.app, ctx.athlete, a.id))).toBe('FORBIDDEN');
+    expect(errorCode(await deleteAxe(ctx.app, ctx.otherCoach, a.id))).toBe('NOT_FOUND');
+    expect((await deleteAxe(ctx.app, ctx.coach, a.id)).data?.deleteAxe).toBe(true);
+    expect(errorCode(await axe(ctx.app, a.id, ctx.coach))).toBe('NOT_FOUND');
+    expect((await fetchPhoto(ctx.app, photo.url)).status).toBe(404);
+
+    // "Race 1" chopped at the seeded, published meet (seeds/src/demo-rack.ts, server/src/results/seed-results.ts).
+    const seeded = (await rack(ctx.app, ctx.ids.clubs.LARCH, { token: ctx.coach })).data!.rack.axes.find((x) => x.label === 'Race 1')!;
+    const refused = await deleteAxe(ctx.app, ctx.coach, seeded.id);
+    expect(refused.errors?.[0]).toMatchObject({ extensions: { code: 'BAD_USER_INPUT', field: 'id' }, message: expect.stringMatching(/^Race 1 is on record in \d+ results?.*Set its status to retired instead/) });
+    expect((await axe(ctx.app, seeded.id, ctx.coach)).data?.axe.label).toBe('Race 1');
+  });
 });
+

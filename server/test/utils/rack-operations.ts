@@ -222,6 +222,10 @@ export function logService(app: INestApplication, token: string, input: Record<s
   return gql<{ logAxeService: AxeDetailShape }>(app, `mutation($i: AxeServiceInput!) { logAxeService(input: $i) { ${DETAIL_FIELDS} } }`, { i: input }, { token });
 }
 
+export function deleteAxe(app: INestApplication, token: string, id: string) {
+  return gql<{ deleteAxe: boolean }>(app, 'mutation($id: ID!) { deleteAxe(id: $id) }', { id }, { token });
+}
+
 export function removeAxePhoto(app: INestApplication, token: string, id: string) {
   return gql<{ removeAxePhoto: boolean }>(app, 'mutation($id: ID!) { removeAxePhoto(id: $id) }', { id }, { token });
 }

@@ -98,6 +98,14 @@ export class PhotosService {
     return true;
   }
 
+  /** Deletes the stored files (picture and thumbnail) of photos whose rows are already gone. */
+  async removeFiles(fileNames: readonly string[]): Promise<void> {
+    for (const fileName of fileNames) {
+      await rm(join(this.folder, fileName), { force: true });
+      await rm(join(this.folder, thumbName(fileName)), { force: true });
+    }
+  }
+
   /** A small WebP for lists: turned upright by the orientation tag, no metadata, never enlarged. */
   private async writeThumbnail(bytes: Buffer, fileName: string): Promise<void> {
     let thumb: Buffer;

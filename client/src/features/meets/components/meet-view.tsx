@@ -6,8 +6,8 @@ import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
-import { useEffect, useState } from 'react';
-import { Link as RouterLink, useLocation, useNavigate } from 'react-router';
+import { useState } from 'react';
+import { Link as RouterLink } from 'react-router';
 
 import { NoticeToast } from '../../../components/ui/notice-toast.js';
 import { PageLoading } from '../../../components/ui/page-loading.js';
@@ -26,11 +26,11 @@ import { LineupLinks } from './lineup-links.js';
 import { MeetChanges } from './meet-changes.js';
 import { ResultsLinks } from './results-links.js';
 import { MeetDaySafety } from './meet-day-safety.js';
-import type { MeetPageState } from './meet-builder.js';
 import { MeetEventCard } from './meet-event-card.js';
 import { MeetHeader } from './meet-header.js';
 import { MeetOrganiserBar } from './meet-organiser-bar.js';
 import { MeetScoringSummary } from './meet-scoring.js';
+import { useCarriedNotice } from '../../../lib/use-carried-notice.js';
 
 /** Statuses in which a meet has results, so its scoring changes are on record. */
 const HAS_RESULTS = ['RUNNING', 'PUBLISHED', 'ARCHIVED'];
@@ -49,14 +49,8 @@ export interface MeetViewProps {
 
 export function MeetView({ meetId, units, ownClubIds }: MeetViewProps) {
   const [dialog, setDialog] = useState<OpenDialog | null>(null);
-  const location = useLocation();
-  const navigate = useNavigate();
-  const [notice, setNotice] = useState<string | undefined>((location.state as MeetPageState | null)?.notice);
-  // Shown once: forget the builder's message so a reload does not repeat it.
-  const carried = Boolean((location.state as MeetPageState | null)?.notice);
-  useEffect(() => {
-    if (carried) void navigate(location.pathname, { replace: true, state: null });
-  }, [carried, navigate, location.pathname]);
+  // The builder's message, shown once.
+  const [notice, setNotice] = useCarriedNotice();
   // Other clubs enter while this page is open elsewhere: show the cache, then refresh it.
   const { data, error, loading, refetch } = useQuery(meetsDocuments.meet, { variables: { id: meetId }, fetchPolicy: 'cache-and-network' });
   const enterable = data?.meet.enterableClubIds ?? [];

@@ -235,4 +235,10 @@ const allClubs: TypedDocumentNode<{ clubs: { id: string; name: string }[] }, Rec
   }
 `;
 
-export const rackDocuments = { allClubs, rack, axe, addAxe, updateAxe, logAxeService, removeAxePhoto, clubMeets, lineup, assignLineup, clearLineupAssignment, lineupOverrides };
+const deleteAxe: TypedDocumentNode<{ deleteAxe: boolean }, { id: string }> = gql`
+  mutation DeleteAxe($id: ID!) {
+    deleteAxe(id: $id)
+  }
+`;
+
+export const rackDocuments = { allClubs, rack, axe, addAxe, updateAxe, deleteAxe, logAxeService, removeAxePhoto, clubMeets, lineup, assignLineup, clearLineupAssignment, lineupOverrides };

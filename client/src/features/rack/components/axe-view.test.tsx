@@ -1,5 +1,6 @@
 import { describe, expect, it } from '@jest/globals';
 import { screen, within } from '@testing-library/react';
+import { GraphQLError } from 'graphql';
 
 import { renderWithProviders } from '../../../../test/render-with-providers.js';
 import { rackDocuments } from '../api/rack-documents.js';
@@ -67,4 +68,27 @@ describe('AxeView', () => {
     expect(await screen.findByText('Regrind logged for Race 3.')).toBeInTheDocument();
     expect(within(screen.getByRole('region', { name: 'Head and handle' })).getByText('16°')).toBeInTheDocument();
   });
+
+  it("asks before deleting an axe and keeps the server's refusal in view when it has history", async () => {
+    const refusal = 'Race 3 is on record in 2 results. Set its status to retired instead, so that history keeps its axe.';
+    const { user } = renderWithProviders({
+      element: <AxeView axeId="axe-race-3" units="METRIC" today="2026-11-30" />,
+      mocks: [
+        axeMock(detail()),
+        { request: { query: rackDocuments.deleteAxe, variables: { id: 'axe-race-3' } }, result: { errors: [new GraphQLError(refusal, { extensions: { code: 'BAD_USER_INPUT', field: 'id' } })] } },
+      ],
+    });
+    await user.click(await screen.findByRole('button', { name: 'Delete' }));
+    const dialog = screen.getByRole('dialog', { name: 'Delete Race 3?' });
+    expect(dialog).toHaveTextContent('set its status to retired instead');
+    await user.click(within(dialog).getByRole('button', { name: 'Delete axe' }));
+    expect(await within(dialog).findByText(refusal)).toBeInTheDocument();
+  });
+
+  it('offers no delete to a reader who cannot manage the rack', async () => {
+    renderWithProviders({ element: <AxeView axeId="axe-race-3" units="METRIC" today="2026-11-30" />, mocks: [axeMock(detail({ canManage: false }))] });
+    await screen.findByRole('region', { name: 'Head and handle' });
+    expect(screen.queryByRole('button', { name: 'Delete' })).not.toBeInTheDocument();
+  });
 });
+

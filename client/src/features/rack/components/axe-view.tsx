@@ -1,4 +1,4 @@
-import { useQuery } from '@apollo/client/react';
+import { useMutation, useQuery } from '@apollo/client/react';
 import Build from '@mui/icons-material/Build';
 import Edit from '@mui/icons-material/Edit';
 import Alert from '@mui/material/Alert';
@@ -8,7 +8,7 @@ import Snackbar from '@mui/material/Snackbar';
 import Stack from '@mui/material/Stack';
 import Typography from '@mui/material/Typography';
 import { useState, type ReactNode } from 'react';
-import { Link as RouterLink } from 'react-router';
+import { Link as RouterLink, useNavigate } from 'react-router';
 
 import { PageHeading } from '../../../components/ui/page-heading.js';
 import { PageLoading } from '../../../components/ui/page-loading.js';
@@ -25,6 +25,7 @@ import { RackCautions } from './rack-cautions.js';
 import { SectionCard } from '../../../components/ui/section-card.js';
 import { ServiceFormDialog } from './service-form-dialog.js';
 import { ServiceHistory } from './service-history.js';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog.js';
 
 export interface AxeViewProps {
   axeId: string;
@@ -37,7 +38,9 @@ export interface AxeViewProps {
 
 export function AxeView({ axeId, units, today, results }: AxeViewProps) {
   const { data, loading, error } = useQuery(rackDocuments.axe, { variables: { id: axeId } });
-  const [dialog, setDialog] = useState<'edit' | 'service' | null>(null);
+  const [dialog, setDialog] = useState<'edit' | 'service' | 'delete' | null>(null);
+  const navigate = useNavigate();
+  const [deleteAxe] = useMutation(rackDocuments.deleteAxe);
   const [notice, setNotice] = useState<string>();
 
   if (loading && !data) return <PageLoading label="Loading the axe" />;
@@ -70,6 +73,9 @@ export function AxeView({ axeId, units, today, results }: AxeViewProps) {
           <Button variant="outlined" startIcon={<Edit />} onClick={() => setDialog('edit')}>
             Edit axe
           </Button>
+          <Button color="error" onClick={() => setDialog('delete')}>
+            Delete
+          </Button>
         </Stack>
       )}
       <RackCautions screen="rack" />
@@ -91,6 +97,22 @@ export function AxeView({ axeId, units, today, results }: AxeViewProps) {
       </SectionCard>
       {dialog === 'edit' && (
         <AxeFormDialog clubId={axe.clubId} units={units} axe={axe} onClose={() => setDialog(null)} onSaved={() => { setDialog(null); setNotice(`${axe.label} saved.`); }} />
+      )}
+      {dialog === 'delete' && (
+        <ConfirmDialog
+          open
+          title={`Delete ${axe.label}?`}
+          confirmLabel="Delete axe"
+          destructive
+          onClose={() => setDialog(null)}
+          onConfirm={async () => {
+            await deleteAxe({ variables: { id: axe.id }, refetchQueries: [rackDocuments.rack] });
+            void navigate(paths.rack.href(axe.clubId), { state: { notice: `${axe.label} deleted.` } });
+          }}
+        >
+          For an axe added by mistake: it goes with its service log and photos, and cannot be brought back. An axe with results, trials or lineup
+          places stays on record; set its status to retired instead.
+        </ConfirmDialog>
       )}
       {dialog === 'service' && <ServiceFormDialog axe={axe} units={units} today={today} onClose={() => setDialog(null)} onSaved={setNotice} />}
       <Snackbar open={Boolean(notice)} autoHideDuration={6000} onClose={() => setNotice(undefined)} message={notice} sx={{ bottom: { xs: 'calc(80px + env(safe-area-inset-bottom))', sm: 24 } }} />

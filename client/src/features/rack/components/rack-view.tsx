@@ -23,6 +23,8 @@ import { RackCautions } from './rack-cautions.js';
 import { RackFilters } from './rack-filters.js';
 import { RackGrid } from './rack-grid.js';
 import { SectionCard } from '../../../components/ui/section-card.js';
+import { NoticeToast } from '../../../components/ui/notice-toast.js';
+import { useCarriedNotice } from '../../../lib/use-carried-notice.js';
 
 export interface RackViewProps {
   /** The caller's clubs (memberships); the first is shown unless the address names another. */
@@ -36,6 +38,8 @@ export function RackView({ memberClubs, anyClub, units }: RackViewProps) {
   const { filter, setFilter, variables, narrowed } = useRackFilter(memberClubs[0]?.id ?? '');
   const navigate = useNavigate();
   const [adding, setAdding] = useState(false);
+  // "… deleted." from the axe page.
+  const [notice, setNotice] = useCarriedNotice();
   const all = useQuery(rackDocuments.allClubs, { skip: !anyClub });
   const choices = anyClub ? (all.data?.clubs ?? []) : memberClubs;
   const { data, loading, error } = useQuery(rackDocuments.rack, { variables: { clubId: filter.clubId, filter: variables }, skip: !filter.clubId });
@@ -112,6 +116,7 @@ export function RackView({ memberClubs, anyClub, units }: RackViewProps) {
       {adding && rack && (
         <AxeFormDialog clubId={rack.clubId} units={units} onClose={() => setAdding(false)} onSaved={(axe) => void navigate(paths.rackAxe.href(axe.id))} />
       )}
+      <NoticeToast message={notice} onClose={() => setNotice(undefined)} />
     </Stack>
   );
 }

@@ -139,6 +139,9 @@ export interface MeetEventInput {
   diameterMm: number | null;
   timeLimitHundredths: number | null;
   weight: number;
+  /** The event's own scoring, or null for the meet's. */
+  scoringScheme: ScoringScheme | null;
+  pointsTable: number[] | null;
   notes: string;
 }
 

@@ -45,6 +45,7 @@ export function EventFormDialog({ meet, event, units, onClose, onSaved }: EventF
   });
 
   const type = types.data?.eventTypes.find((candidate) => candidate.id === watch('eventTypeId'));
+  const scoring = watch('scoring');
   const usual = type?.defaultDiameters.find((entry) => entry.division === watch('division'));
   const diameterHint = usual
     ? `Leave blank for this event's usual ${formatDiameter(usual.diameterMm, units)}.`
@@ -111,6 +112,28 @@ export function EventFormDialog({ meet, event, units, onClose, onSaved }: EventF
         helperText="Points in this event are multiplied by this (1 for most events, 1.5 for a technical one)."
         slotProps={{ htmlInput: { inputMode: 'decimal' } }}
       />
+      <SelectField
+        control={control}
+        name="scoring"
+        label="Scoring"
+        helperText="Most events score like the rest of the meet; a championship or novelty event may have its own."
+        options={[
+          { value: 'MEET', label: 'As the rest of the meet' },
+          { value: 'FIXED_TABLE', label: 'Its own points table' },
+          { value: 'FIELD_SIZE', label: 'Field size' },
+          { value: 'PERCENT_OF_BEST', label: 'Percentage of the best' },
+        ]}
+      />
+      {scoring === 'FIXED_TABLE' && (
+        <FormTextField
+          label="Points table for this event"
+          placeholder="10, 8, 6, 4, 2"
+          registration={register('pointsTable')}
+          fieldError={errors.pointsTable}
+          helperText="First place first; lower places earn nothing."
+          slotProps={{ htmlInput: { inputMode: 'decimal', autoComplete: 'off' } }}
+        />
+      )}
       <FormTextField label="Notes (optional)" multiline minRows={2} registration={register('notes')} fieldError={errors.notes} />
     </FormDialog>
   );

@@ -32,6 +32,9 @@ function facts(event: MeetEvent, units: UnitPreference): string[] {
   }
   if (event.timeLimitHundredths !== null) lines.push(`Time limit: ${formatTime(event.timeLimitHundredths)}`);
   if (event.weight !== 1) lines.push(`Counts ×${event.weight}`);
+  if (event.scoringScheme === 'FIXED_TABLE' && event.pointsTable?.length) lines.push(`Own points table: ${event.pointsTable.join('-')}`);
+  else if (event.scoringScheme === 'FIELD_SIZE') lines.push('Scored by field size');
+  else if (event.scoringScheme === 'PERCENT_OF_BEST') lines.push('Scored as a percentage of the best');
   return lines;
 }
 

@@ -104,4 +104,10 @@ describe('MeetView', () => {
     await screen.findByRole('heading', { level: 1 });
     expect(screen.queryByRole('link', { name: 'Post results' })).not.toBeInTheDocument();
   });
+
+  it('says when an event has its own scoring', async () => {
+    renderMeet(testMeet({ events: [testMeetEvent({ scoringScheme: 'FIXED_TABLE', pointsTable: [10, 8, 6] })], enterableClubIds: [] }));
+    expect(await screen.findByText(/Own points table: 10-8-6/)).toBeInTheDocument();
+  });
 });
+

@@ -29,8 +29,20 @@ describe('eventFormSchema', () => {
       diameterMm: 304.8,
       timeLimitHundredths: 9000,
       weight: 1,
+      scoringScheme: null,
+      pointsTable: null,
       notes: '',
     });
+  });
+
+  it("gives an event its own points table, checked like the meet's, or leaves it to the meet", () => {
+    const own = { ...filled, scoring: 'FIXED_TABLE' as const, pointsTable: '10-8-6-4-2' };
+    expect(issues(own)).toEqual({});
+    expect(toMeetEventInput(own)).toMatchObject({ scoringScheme: 'FIXED_TABLE', pointsTable: [10, 8, 6, 4, 2] });
+    expect(issues({ ...own, pointsTable: '4, 6' })).toEqual({ pointsTable: 'Place 2 cannot earn more points than place 1.' });
+    // A table typed before switching back to the meet's scoring is not sent.
+    expect(toMeetEventInput({ ...own, scoring: 'MEET' })).toMatchObject({ scoringScheme: null, pointsTable: null });
+    expect(toMeetEventInput({ ...own, scoring: 'FIELD_SIZE' })).toMatchObject({ scoringScheme: 'FIELD_SIZE', pointsTable: null });
   });
 
   it('leaves a blank diameter to the event type default and a blank species unset', () => {

@@ -2,6 +2,7 @@ import { DIVISIONS, formatTime, inchesToMm, mmToInches, parseTime } from '@endgr
 import { z } from 'zod';
 
 import type { MeetEvent, MeetEventInput, UnitPreference } from '../api/types.js';
+import { parsePointsTable } from '../lib/points-table.js';
 
 export type LengthUnit = 'mm' | 'in';
 
@@ -28,9 +29,16 @@ export const eventFormSchema = z
       const value = decimal(text);
       return text.trim() !== '' && value > 0 && value <= 10;
     }, 'Event weight must be more than 0 and at most 10 (for example 1.5).'),
+    // "MEET" scores the event like the rest of the meet; anything else overrides it for this event.
+    scoring: z.enum(['MEET', 'FIXED_TABLE', 'FIELD_SIZE', 'PERCENT_OF_BEST']),
+    pointsTable: z.string(),
     notes: z.string().max(400, 'Keep the notes under 400 characters.'),
   })
   .superRefine((values, context) => {
+    if (values.scoring === 'FIXED_TABLE') {
+      const parsed = parsePointsTable(values.pointsTable);
+      if (!parsed.ok) context.addIssue({ code: 'custom', path: ['pointsTable'], message: parsed.message });
+    }
     const mm = diameterInMm(values.diameter, values.diameterUnit);
     if (mm !== null && !(mm >= 50 && mm <= 1500)) {
       context.addIssue({ code: 'custom', path: ['diameter'], message: 'Block diameter must be between 50 mm (2 in) and 1500 mm (59 in).' });
@@ -54,6 +62,8 @@ export const EVENT_SERVER_FIELDS = {
   diameterMm: 'diameter',
   timeLimitHundredths: 'timeLimit',
   weight: 'weight',
+  scoringScheme: 'scoring',
+  pointsTable: 'pointsTable',
   notes: 'notes',
 } as const satisfies Record<string, keyof EventFormValues>;
 
@@ -68,6 +78,8 @@ export function eventFormDefaults(event: MeetEvent | undefined, units: UnitPrefe
     diameterUnit: unit,
     timeLimit: event?.timeLimitHundredths == null ? '' : formatTime(event.timeLimitHundredths),
     weight: String(event?.weight ?? 1),
+    scoring: event?.scoringScheme ?? 'MEET',
+    pointsTable: event?.pointsTable?.join(', ') ?? '',
     notes: event?.notes ?? '',
   };
 }
@@ -83,6 +95,8 @@ export function toMeetEventInput(values: EventFormValues): MeetEventInput {
     diameterMm: mm === null ? null : Math.round(mm * 10) / 10,
     timeLimitHundredths: limit?.ok ? limit.hundredths : null,
     weight: decimal(values.weight),
+    scoringScheme: values.scoring === 'MEET' ? null : values.scoring,
+    pointsTable: values.scoring === 'FIXED_TABLE' ? ((p) => (p.ok ? p.points : null))(parsePointsTable(values.pointsTable)) : null,
     notes: values.notes.trim(),
   };
 }

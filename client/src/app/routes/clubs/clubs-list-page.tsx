@@ -7,7 +7,7 @@ export function ClubsListPage() {
   return (
     <>
       <PageHeading lead="The league's clubs and their rosters. Coaches keep their own club's roster and invitations here.">Clubs</PageHeading>
-      <ClubsList myClubIds={user?.clubs.map((membership) => membership.clubId) ?? []} />
+      <ClubsList myClubIds={user?.clubs.map((membership) => membership.clubId) ?? []} canAdd={user?.role === 'ADMIN'} />
     </>
   );
 }

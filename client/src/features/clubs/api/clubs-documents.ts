@@ -137,7 +137,17 @@ const updateClub: TypedDocumentNode<{ updateClub: Club }, { id: string; input: C
   ${CLUB_FIELDS}
 `;
 
+const createClub: TypedDocumentNode<{ createClub: Club }, { input: ClubInput }> = gql`
+  mutation CreateClub($input: ClubInput!) {
+    createClub(input: $input) {
+      ...ClubFields
+    }
+  }
+  ${CLUB_FIELDS}
+`;
+
 export const clubsDocuments = {
+  createClub,
   updateClub,
   clubs,
   club,

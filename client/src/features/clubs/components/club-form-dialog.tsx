@@ -20,21 +20,23 @@ import { CLUB_FORM_FIELDS, clubFormDefaults, clubFormSchema, toClubInput, type C
 import { ClubColours } from './club-colours.js';
 
 export interface ClubFormDialogProps {
-  club: ClubDetail;
+  /** The club to edit; leave out to add one (league administrators). */
+  club?: ClubDetail;
   onClose: () => void;
   onDone: (message: string) => void;
 }
 
-/** A coach edits their club's name, short name, region, contact address and colours. */
+/** A coach edits their club's name, short name, region, contact address and colours; an administrator adds a club. */
 export function ClubFormDialog({ club, onClose, onDone }: ClubFormDialogProps) {
   const theme = useTheme();
   const fullScreen = useMediaQuery(theme.breakpoints.down('sm'), { noSsr: true });
   const titleId = useId();
   const [alert, setAlert] = useState<string>();
   const [update] = useMutation(clubsDocuments.updateClub, {
-    refetchQueries: [{ query: clubsDocuments.club, variables: { id: club.id } }, { query: clubsDocuments.clubs }],
+    refetchQueries: [...(club ? [{ query: clubsDocuments.club, variables: { id: club.id } }] : []), { query: clubsDocuments.clubs }],
     awaitRefetchQueries: true,
   });
+  const [create] = useMutation(clubsDocuments.createClub, { refetchQueries: [{ query: clubsDocuments.clubs }], awaitRefetchQueries: true });
   const { register, control, handleSubmit, setError, formState } = useForm<ClubFormValues>({ resolver: zodResolver(clubFormSchema), defaultValues: clubFormDefaults(club) });
   const [primary, secondary] = useWatch({ control, name: ['colourPrimary', 'colourSecondary'] });
   const valid = (c: string) => (/^#[0-9a-fA-F]{6}$/.test(c) ? c : '#ffffff');
@@ -43,8 +45,9 @@ export function ClubFormDialog({ club, onClose, onDone }: ClubFormDialogProps) {
     setAlert(undefined);
     const input = toClubInput(values);
     try {
-      await update({ variables: { id: club.id, input } });
-      onDone(`${input.name} saved.`);
+      if (club) await update({ variables: { id: club.id, input } });
+      else await create({ variables: { input } });
+      onDone(club ? `${input.name} saved.` : `${input.name} added. Invite its coaches from the club page.`);
       onClose();
     } catch (error) {
       setAlert(applyServerErrors(error, { setError, fields: CLUB_FORM_FIELDS }));
@@ -53,7 +56,7 @@ export function ClubFormDialog({ club, onClose, onDone }: ClubFormDialogProps) {
 
   return (
     <Dialog open onClose={onClose} aria-labelledby={titleId} fullWidth maxWidth="sm" fullScreen={fullScreen}>
-      <DialogTitle id={titleId}>Edit club details</DialogTitle>
+      <DialogTitle id={titleId}>{club ? 'Edit club details' : 'Add a club'}</DialogTitle>
       <DialogContent>
         <Stack component="form" id={`${titleId}-form`} noValidate onSubmit={submit} spacing={2.5} sx={{ pt: 1 }}>
           <FormAlert message={alert} />
@@ -74,7 +77,7 @@ export function ClubFormDialog({ club, onClose, onDone }: ClubFormDialogProps) {
       </DialogContent>
       <DialogActions sx={{ px: 3, pb: 2, gap: 1 }}>
         <Button onClick={onClose} disabled={formState.isSubmitting}>Cancel</Button>
-        <Button type="submit" form={`${titleId}-form`} variant="contained" loading={formState.isSubmitting}>Save</Button>
+        <Button type="submit" form={`${titleId}-form`} variant="contained" loading={formState.isSubmitting}>{club ? 'Save' : 'Add club'}</Button>
       </DialogActions>
     </Dialog>
   );

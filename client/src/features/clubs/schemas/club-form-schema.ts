@@ -20,7 +20,9 @@ export type ClubFormValues = z.infer<typeof clubFormSchema>;
 
 export const CLUB_FORM_FIELDS = ['name', 'shortName', 'region', 'contactEmail', 'colourPrimary', 'colourSecondary'] as const;
 
-export function clubFormDefaults(club: Pick<ClubDetail, 'name' | 'shortName' | 'region' | 'contactEmail' | 'colourPrimary' | 'colourSecondary'>): ClubFormValues {
+/** A club's current details, or a blank form in the league's default colours for a new club. */
+export function clubFormDefaults(club?: Pick<ClubDetail, 'name' | 'shortName' | 'region' | 'contactEmail' | 'colourPrimary' | 'colourSecondary'>): ClubFormValues {
+  if (!club) return { name: '', shortName: '', region: '', contactEmail: '', colourPrimary: '#2f5d3a', colourSecondary: '#c9a66b' };
   return { name: club.name, shortName: club.shortName, region: club.region, contactEmail: club.contactEmail ?? '', colourPrimary: club.colourPrimary, colourSecondary: club.colourSecondary };
 }
 

@@ -70,11 +70,7 @@ export class ResultsWriter {
     }
     if (audits.length === 0) return { written: 0, unchanged, meetEventIds: [] };
 
-    const perEvent = groupBy(all, (r) => r.meetEventId);
-    for (const eventId of touched) rank(meet, events.get(eventId)!, perEvent.get(eventId) ?? []);
-    const dirty = all.filter((r) => !before.has(r.id) || moved(before.get(r.id)!, r));
-    await this.repo.upsert(m, dirty);
-    await this.repo.replaceStandings(m, meet.id, standings(meet.id, await this.repo.standingInputs(m, meet.id)));
+    await rankAndStore(this.repo, m, meet, touched.map((id) => events.get(id)!), all, before);
     await this.repo.audit(m, audits.map(({ result, before: was }) => auditRow(result, was, options)));
     if (meet.status === 'CLOSED') await this.repo.setMeetStatus(m, meet.id, 'RUNNING');
     return { written: audits.length, unchanged, meetEventIds: touched };
@@ -93,14 +89,25 @@ export async function rescoreMeet(repo: ResultsRepository, m: EntityManager, mee
   const all = await repo.resultsOfEvents(m, events.map((e) => e.id));
   if (all.length === 0) return 0;
   const before = new Map(all.map((r) => [r.id, { ...r }]));
-  const perEvent = groupBy(all, (r) => r.meetEventId);
-  for (const event of events) rank(meet, event, perEvent.get(event.id) ?? []);
-  const dirty = all.filter((r) => moved(before.get(r.id)!, r));
-  await repo.upsert(m, dirty);
-  await repo.replaceStandings(m, meetId, standings(meetId, await repo.standingInputs(m, meetId)));
+  const dirty = await rankAndStore(repo, m, meet, events, all, before);
   const audit: WriteOptions = { userId: options.userId, action: 'CORRECTED', reason: `Scoring changed: ${options.reason}` };
   await repo.audit(m, dirty.map((r) => auditRow(r, auditView(before.get(r.id)!), audit)));
   return dirty.length;
+}
+
+/**
+ * Ranks the given events' results, saves the rows that are new or whose values moved, and
+ * rewrites the meet's standings. Returns the saved rows.
+ */
+async function rankAndStore(
+  repo: ResultsRepository, m: EntityManager, meet: MeetEntity, events: readonly MeetEventEntity[], all: ResultEntity[], before: ReadonlyMap<string, ResultEntity>,
+): Promise<ResultEntity[]> {
+  const perEvent = groupBy(all, (r) => r.meetEventId);
+  for (const event of events) rank(meet, event, perEvent.get(event.id) ?? []);
+  const dirty = all.filter((r) => !before.has(r.id) || moved(before.get(r.id)!, r));
+  await repo.upsert(m, dirty);
+  await repo.replaceStandings(m, meet.id, standings(meet.id, await repo.standingInputs(m, meet.id)));
+  return dirty;
 }
 
 function newResult(meet: MeetEntity, event: MeetEventEntity, entry: ResultChange['entry']): ResultEntity {

@@ -14,6 +14,7 @@ import { eventFormDefaults, eventFormSchema, toMeetEventInput, type EventFormVal
 import { DiameterField } from './diameter-field.js';
 import { FormDialog } from '../../../components/ui/form-dialog.js';
 import { SelectField } from '../../../components/ui/select-field.js';
+import { sentenceCase } from '../../../lib/sentence-case.js';
 
 export interface EventFormDialogProps {
   meet: MeetDetail;
@@ -27,7 +28,7 @@ export interface EventFormDialogProps {
 const SPECIES_OPTIONS = [
   { value: '', label: 'Not set' },
   // The table prints names in running-text case ("eastern white pine"); a list entry starts with a capital.
-  ...listSpecies().map((species) => ({ value: species.id, label: species.commonName.charAt(0).toUpperCase() + species.commonName.slice(1) })),
+  ...listSpecies().map((species) => ({ value: species.id, label: sentenceCase(species.commonName) })),
 ];
 
 /** Adds or edits one meet event: event type, division, block, time limit, weight, notes. */

@@ -6,6 +6,7 @@ import Typography from '@mui/material/Typography';
 import { meetsDocuments } from '../api/meets-documents.js';
 import type { MeetScoring } from '../api/types.js';
 import { describeMeetChange } from '../lib/describe-meet-change.js';
+import { formatMoment } from '../../../lib/format-moment.js';
 
 /** For organisers, once a meet has results: each change to its scoring, who made it, when and why. */
 export function MeetChanges({ meetId, meet }: { meetId: string; meet: MeetScoring }) {
@@ -24,7 +25,7 @@ export function MeetChanges({ meetId, meet }: { meetId: string; meet: MeetScorin
             <li key={c.id}>
               <Typography sx={{ fontWeight: 700 }}>{c.summary}</Typography>
               <Typography variant="body2" sx={{ color: 'text.secondary' }}>
-                {new Date(c.at).toLocaleString(undefined, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' })} · {c.byName ?? 'an account no longer on record'}
+                {formatMoment(c.at)} · {c.byName ?? 'an account no longer on record'}
               </Typography>
               {was.map((line) => <Typography key={`was-${line}`} variant="body2">Was: {line}</Typography>)}
               {now.map((line) => <Typography key={`now-${line}`} variant="body2">Now: {line}</Typography>)}

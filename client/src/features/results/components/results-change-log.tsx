@@ -13,13 +13,10 @@ import { useState } from 'react';
 import { SectionCard } from '../../../components/ui/section-card.js';
 import { resultsDocuments as docs } from '../api/results-documents.js';
 import { describeAuditChange } from '../lib/describe-audit.js';
+import { formatMoment } from '../../../lib/format-moment.js';
 
 const PAGE = 20;
 const ACTION_LABELS = { RECORDED: 'Posted', IMPORTED: 'Imported from a sheet', CORRECTED: 'Corrected' } as const;
-
-function when(iso: string): string {
-  return new Date(iso).toLocaleString(undefined, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
-}
 
 /** For organisers: every change to this meet's results, newest first, with who, when, why and what changed. */
 export function ResultsChangeLog({ meetId, labels }: { meetId: string; labels: ReadonlyMap<string, string> }) {
@@ -48,7 +45,7 @@ export function ResultsChangeLog({ meetId, labels }: { meetId: string; labels: R
                   primary={`${ACTION_LABELS[e.action] ?? e.action}: ${labels.get(e.entryId) ?? 'an entry since withdrawn'}`}
                   secondary={
                     <>
-                      {`${when(e.at)} · ${e.byName ?? 'an account no longer on record'}${e.reason ? ` · reason: ${e.reason}` : ''}`}
+                      {`${formatMoment(e.at)} · ${e.byName ?? 'an account no longer on record'}${e.reason ? ` · reason: ${e.reason}` : ''}`}
                       <br />
                       {describeAuditChange(e.before, e.after)}
                     </>

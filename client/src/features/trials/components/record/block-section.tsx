@@ -14,6 +14,7 @@ import { CONDITIONS, GRIND_WORDS } from '../../lib/trial-words.js';
 import { FrozenWoodNote } from '../frozen-wood-note.js';
 import { ChoiceButtons } from './choice-buttons.js';
 import { TestersField } from './testers-field.js';
+import { sentenceCase } from '../../../../lib/sentence-case.js';
 
 const SPECIES = listSpecies();
 
@@ -40,7 +41,7 @@ export function BlockSection({ draft, setup, problems, onChange }: BlockSectionP
       <TextField select label="Species" value={draft.speciesId} onChange={(e) => onChange({ speciesId: e.target.value })} helperText={hint('speciesId')}>
         {SPECIES.map((s) => (
           <MenuItem key={s.id} value={s.id}>
-            {s.commonName.charAt(0).toUpperCase() + s.commonName.slice(1)}
+            {sentenceCase(s.commonName)}
           </MenuItem>
         ))}
       </TextField>

@@ -1,7 +1,8 @@
 import { describe, expect, it } from '@jest/globals';
 
 import { errorCode } from '../utils/graphql.js';
-import { addAxe, axe, axeInput, deleteAxe, fetchPhoto, pngImage, realJpegWithMetadata, removeAxePhoto, rack, uploadPhoto, useRackApp } from '../utils/rack-operations.js';
+import { recordResult, resultsMeet } from '../utils/results-operations.js';
+import { addAxe, axe, axeInput, deleteAxe, fetchPhoto, pngImage, realJpegWithMetadata, removeAxePhoto, uploadPhoto, useRackApp } from '../utils/rack-operations.js';
 
 const LIMIT = 8 * 1024 * 1024; // the product's stated photo limit: 8 MiB
 
@@ -106,11 +107,16 @@ describe('axe photos over REST (real MariaDB, real upload folder)', () => {
     expect(errorCode(await axe(ctx.app, a.id, ctx.coach))).toBe('NOT_FOUND');
     expect((await fetchPhoto(ctx.app, photo.url)).status).toBe(404);
 
-    // "Race 1" chopped at the seeded, published meet (seeds/src/demo-rack.ts, server/src/results/seed-results.ts).
-    const seeded = (await rack(ctx.app, ctx.ids.clubs.LARCH, { token: ctx.coach })).data!.rack.axes.find((x) => x.label === 'Race 1')!;
-    const refused = await deleteAxe(ctx.app, ctx.coach, seeded.id);
-    expect(refused.errors?.[0]).toMatchObject({ extensions: { code: 'BAD_USER_INPUT', field: 'id' }, message: expect.stringMatching(/^Race 1 is on record in \d+ results?.*Set its status to retired instead/) });
-    expect((await axe(ctx.app, seeded.id, ctx.coach)).data?.axe.label).toBe('Race 1');
+    // An axe that chopped a posted result stays: it is retired, not deleted.
+    const used = await newAxe();
+    const { athletes } = await resultsMeet(ctx.app, ctx.ids, { organiser: ctx.organiser, coach: ctx.coach, otherCoach: ctx.otherCoach });
+    await recordResult(ctx.app, ctx.organiser, { entryId: athletes[0]!.entryId, status: 'FINISHED', times: ['40.00'], axeId: used.id });
+    const refused = await deleteAxe(ctx.app, ctx.coach, used.id);
+    expect(refused.errors?.[0]).toMatchObject({
+      extensions: { code: 'BAD_USER_INPUT', field: 'id' },
+      message: `${used.label} is on record in 1 result. Set its status to retired instead, so that history keeps its axe.`,
+    });
+    expect((await axe(ctx.app, used.id, ctx.coach)).data?.axe.label).toBe(used.label);
   });
 });
 

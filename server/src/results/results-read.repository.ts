@@ -161,7 +161,7 @@ export class ResultsReadRepository {
   private async axes(where: string, params: unknown[]): Promise<AxeSetup[]> {
     type Row = { id: string; clubId: string; label: string; grind: AxeSetup['grind']; bevel: string | null; chisel: string | null };
     const rows = await this.db.query<Row[]>(
-      `SELECT id, club_id AS clubId, label, grind, bevel_included_deg AS bevel, chisel_width_mm AS chisel FROM axes WHERE ${where}`,
+      `SELECT id, club_id AS clubId, label, grind, bevel_included_deg AS bevel, chisel_width_mm AS chisel FROM axes WHERE ${where} ORDER BY club_id, label`,
       params,
     );
     return rows.map((r) => ({ id: r.id, clubId: r.clubId, label: r.label, grind: r.grind, bevelIncludedDeg: decimalOrNull(r.bevel), chiselWidthMm: decimalOrNull(r.chisel) }));
